@@ -1,0 +1,4 @@
+export * from './organizations';
+export * from './users';
+export * from './auth-tokens';
+export * from './sessions';

@@ -1,0 +1,70 @@
+import { existsSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import express from 'express';
+import helmet from 'helmet';
+import type { Database } from '../db';
+import { createPassport } from './lib/auth/passport';
+import type { Config } from './lib/config';
+import { csrfGuard } from './lib/csrf';
+import { errorHandler, notFoundHandler } from './lib/errors';
+import type { Mailer } from './lib/mail';
+import { sessionMiddleware } from './lib/session';
+import { authRouter } from './features/auth/routes';
+import { verifyCredentials } from './features/auth/service';
+import { healthRouter } from './features/health/routes';
+import { adminRouter, organizationsRouter } from './features/organizations/routes';
+import { outboxRouter } from './features/outbox/routes';
+
+export interface AppDeps {
+  config: Config;
+  database: Database;
+  mailer: Mailer;
+  /** folder of the built client (vite build); served with an SPA fallback when present */
+  clientDir?: string;
+}
+
+const defaultClientDir = fileURLToPath(new URL('../dist', import.meta.url));
+
+/** Assembles the app in a visible order: headers → body → session → auth → routers → 404 → errors. */
+export function createApp({ config, database, mailer, clientDir = defaultClientDir }: AppDeps) {
+  const { db, pool } = database;
+  const deps = { db, mailer, config };
+  const passport = createPassport(db, (email, password) => verifyCredentials(deps, email, password));
+
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', config.APP_URL.startsWith('https://') ? 1 : false);
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          // naive-ui injects its component styles at run time
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'upgrade-insecure-requests': config.APP_URL.startsWith('https://') ? [] : null,
+        },
+      },
+    }),
+  );
+  app.use(express.json({ limit: '1mb' }));
+  app.use('/api', sessionMiddleware(config, pool));
+  app.use('/api', passport.session());
+  app.use('/api', csrfGuard([config.APP_URL]));
+
+  app.use('/api/health', healthRouter(pool));
+  app.use('/api/auth', authRouter(deps, pool, passport));
+  app.use('/api/organizations', organizationsRouter(deps));
+  app.use('/api/admin', adminRouter(deps));
+  app.use('/api/dev', outboxRouter(config.OUTBOX_URL));
+  app.use('/api', notFoundHandler);
+
+  if (existsSync(clientDir)) {
+    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+    // Every other GET is a client route: hand out the single page.
+    app.get(/^\/(?!api\/).*/, (_req, res) => res.sendFile('index.html', { root: clientDir, maxAge: 0 }));
+  }
+  app.use(notFoundHandler);
+  app.use(errorHandler);
+  return app;
+}

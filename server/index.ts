@@ -1,0 +1,33 @@
+/** Starts the app: configuration, database, job queue and mail worker, then listens. */
+import { createDatabase } from '../db';
+import { createApp } from './app';
+import { loadConfig } from './lib/config';
+import { startJobs } from './lib/jobs';
+import { createTransport, queuedMailer, startMailWorker } from './lib/mail';
+
+let config;
+try {
+  config = loadConfig();
+} catch (err) {
+  console.error((err as Error).message);
+  process.exit(1);
+}
+
+const database = createDatabase(config.DATABASE_URL);
+const jobs = await startJobs(config.DATABASE_URL);
+await startMailWorker(jobs, createTransport(config.SMTP_URL), config.MAIL_FROM);
+
+const app = createApp({ config, database, mailer: queuedMailer(jobs) });
+const server = app.listen(config.PORT, config.HOST, () => {
+  console.log(`[app] Bundlesmith listening on http://${config.HOST}:${config.PORT} (${config.APP_URL})`);
+});
+
+async function shutdown(signal: string) {
+  console.log(`[app] ${signal}: shutting down`);
+  server.close();
+  await jobs.stop({ graceful: true, timeout: 5000 }).catch(() => undefined);
+  await database.pool.end().catch(() => undefined);
+  process.exit(0);
+}
+process.on('SIGTERM', () => void shutdown('SIGTERM'));
+process.on('SIGINT', () => void shutdown('SIGINT'));
