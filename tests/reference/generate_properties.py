@@ -7,8 +7,9 @@ Writes tests/reference/fixtures/properties.json from Debian's python3-iapws:
     (states at or above saturation are skipped);
   * saturation line of water (IAPWS-95): pressure and enthalpy of vaporisation, 1..150 degC;
   * dry air: iapws.humidAir.Air, the Lemmon, Jacobsen, Penoncello & Friend (2000) equation of
-    state with the Lemmon & Jacobsen (2004) viscosity and conductivity, -20..300 degC at
-    1, 5, 10 and 25 bar(a).
+    state with the Lemmon & Jacobsen (2004) viscosity and conductivity, -40..400 degC at
+    1, 5, 10, 25 and 50 bar(a) (the library's declared range; -20..300 degC, 1..25 bar is the
+    range the product promises).
 Run:  /usr/bin/python3 tests/reference/generate_properties.py   (from the repo root)
 """
 import json
@@ -53,8 +54,8 @@ def saturation_line():
 
 def air_states():
     rows = []
-    for p_bar in (1.0, 5.0, 10.0, 25.0):
-        for t in (-20, 0, 20, 40, 60, 80, 100, 150, 200, 250, 300):
+    for p_bar in (1.0, 5.0, 10.0, 25.0, 50.0):
+        for t in (-40, -20, 0, 20, 40, 60, 80, 100, 150, 200, 250, 300, 350, 400):
             s = Air(T=t + 273.15, P=p_bar / 10)
             rows.append({"temp_C": t, "pressure_Pa": p_bar * 1e5, "density": s.rho,
                          "specificHeat": s.cp * 1e3, "viscosity": s.mu, "conductivity": s.k})
