@@ -1,0 +1,66 @@
+import type { RouteRecordRaw } from 'vue-router';
+import type { Role } from '@shared/schemas/auth';
+
+declare module 'vue-router' {
+  interface RouteMeta {
+    /** Reachable without a session. */
+    public?: boolean;
+    /** A signed-in user is sent home instead (sign-in, register). */
+    guestOnly?: boolean;
+    /** Only these roles may open the page; others are sent home with a notice. */
+    roles?: readonly Role[];
+    /** Shown in the browser tab. */
+    title?: string;
+    /** Present when the page belongs in the main navigation. */
+    nav?: { label: string; order: number };
+  }
+}
+
+const authPage = () => import('../views/auth/index.vue');
+
+export const routes: RouteRecordRaw[] = [
+  // The four account pages share one page (views/auth) that shows the form named by the route.
+  ...(
+    [
+      ['/sign-in', 'sign-in', 'Sign in', true],
+      ['/register', 'register', 'Create an account', true],
+      ['/reset-password', 'reset-password', 'Reset your password', false],
+      ['/reset-password/confirm', 'reset-password-confirm', 'Choose a new password', false],
+    ] as const
+  ).map(([path, name, title, guestOnly]) => ({
+    path,
+    name,
+    component: authPage,
+    meta: { public: true, guestOnly, title },
+  })),
+  {
+    path: '/',
+    component: () => import('../components/app-shell.vue'),
+    children: [
+      {
+        path: '',
+        name: 'home',
+        component: () => import('../views/home/index.vue'),
+        meta: { title: 'Home', nav: { label: 'Home', order: 0 } },
+      },
+      {
+        path: 'admin/invitations',
+        name: 'admin-invitations',
+        component: () => import('../views/admin/invitations/index.vue'),
+        meta: { title: 'Invitations', roles: ['admin'], nav: { label: 'Invitations', order: 80 } },
+      },
+      {
+        path: 'admin/outbox',
+        name: 'admin-outbox',
+        component: () => import('../views/admin/outbox/index.vue'),
+        meta: { title: 'Outbox', roles: ['admin'], nav: { label: 'Outbox', order: 90 } },
+      },
+    ],
+  },
+  {
+    path: '/:pathMatch(.*)*',
+    name: 'not-found',
+    component: () => import('../views/not-found/index.vue'),
+    meta: { public: true, title: 'Page not found' },
+  },
+];
