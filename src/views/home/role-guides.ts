@@ -1,0 +1,116 @@
+import type { Role } from '@shared/schemas/auth';
+
+/** A job a role does here: either a page that exists now (`route`) or one still being built. */
+export interface RoleTask {
+  title: string;
+  text: string;
+  route?: string;
+}
+
+export interface RoleGuide {
+  heading: string;
+  summary: string;
+  now: RoleTask[];
+  coming: RoleTask[];
+}
+
+// What each role does in Bundlesmith. Only tasks with a route link anywhere; the rest is told as text.
+export const roleGuides: Record<Role, RoleGuide> = {
+  customer: {
+    heading: 'Order coolers sized to your duty',
+    summary:
+      'You state what has to be cooled; the fabricator sizes the bundle, prices it and stands behind the offer. ' +
+      'Quotes and orders of your organisation are visible to your colleagues there and to the fabricator only.',
+    now: [],
+    coming: [
+      {
+        title: 'Request a sized cooler',
+        text:
+          'Describe the duty — hot fluid (compressed air, hydraulic or lube oil, glycol, process liquid), flow, ' +
+          'inlet and target outlet temperature, and the coolant you have — and get a sized, priced design in minutes.',
+      },
+      {
+        title: 'Compare and attach',
+        text: 'Compare design options side by side and attach your own datasheet or drawing to a request.',
+      },
+      {
+        title: 'Track quotes and orders',
+        text:
+          'Follow each offer through the engineers’ review, accept it with your PO number, pay the deposit and ' +
+          'watch the order move through the shop.',
+      },
+    ],
+  },
+  sales: {
+    heading: 'Review and approve offers',
+    summary:
+      'Customers’ requests arrive already sized and priced from the price book. You check the engineering, ' +
+      'adjust where judgement is needed, and send the offer under the company’s name.',
+    now: [],
+    coming: [
+      {
+        title: 'Review queue',
+        text: 'Every new request with its auto-sized design, oldest first, with the checks that need a human eye.',
+      },
+      {
+        title: 'Correct and revise',
+        text:
+          'Change the duty or the geometry, set fouling allowances, margins and materials; each change makes a new ' +
+          'revision that keeps the old one intact.',
+      },
+      {
+        title: 'Approve offers',
+        text: 'Adjust price lines with a stated reason, approve and send; revise when the customer changes the duty.',
+      },
+    ],
+  },
+  shop: {
+    heading: 'Build from the sheet',
+    summary:
+      'Every accepted order becomes a build sheet derived from the approved design, so what is drilled is what was ' +
+      'sold.',
+    now: [],
+    coming: [
+      {
+        title: 'Build sheets',
+        text:
+          'Bill of materials, cut list, tubesheet drilling pattern with hole coordinates, hydrotest pressure and ' +
+          'inspection points, as PDF and CSV.',
+      },
+      {
+        title: 'Report progress',
+        text: 'Mark each order’s stages as they are done so sales and the customer see where it stands.',
+      },
+    ],
+  },
+  admin: {
+    heading: 'Keep the house in order',
+    summary: 'You decide who works here and with which role, and keep the figures every quote is priced from.',
+    now: [
+      {
+        title: 'Invitations',
+        text: 'Invite sales engineers, shop staff, other administrators or customers by e-mail.',
+        route: 'admin-invitations',
+      },
+      {
+        title: 'Outbox',
+        text: 'Read every e-mail the application has sent — invitations, password resets — as caught by the local mail sink.',
+        route: 'admin-outbox',
+      },
+    ],
+    coming: [
+      {
+        title: 'Price book',
+        text: 'Material, tube, labour and overhead rates and margins that feed every automatic quote.',
+      },
+      {
+        title: 'Materials and fluids',
+        text: 'The tube and shell materials and the fluid library the sizing draws on, each with its source.',
+      },
+      {
+        title: 'Users and deposit rules',
+        text: 'Change roles, switch off accounts, and set how much deposit an order needs.',
+      },
+    ],
+  },
+};
