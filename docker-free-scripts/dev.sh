@@ -5,7 +5,7 @@ env_defaults
 ensure_node_modules
 setup_database
 seed_db
-start_bg smtp-sink npx tsx server/fakes/smtp-sink/index.ts
+start_bg smtp-sink node --import tsx server/fakes/smtp-sink/index.ts
 trap 'kill 0' EXIT
 npx tsx watch server/index.ts &
 npx vite

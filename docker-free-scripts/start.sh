@@ -7,13 +7,13 @@ ensure_node_modules
 setup_database
 seed_db
 
-start_bg smtp-sink npx tsx server/fakes/smtp-sink/index.ts
+start_bg smtp-sink node --import tsx server/fakes/smtp-sink/index.ts
 wait_port "$SMTP_SINK_PORT" 30 || die "the SMTP sink did not start (log: $DATA_DIR/logs/smtp-sink.log)"
 
 log "building the client"
 npx vite build --logLevel warn
 
-start_bg app npx tsx server/index.ts
+start_bg app node --import tsx server/index.ts
 if ! wait_http "$APP_URL/api/health" 60; then
   tail -n 30 "$DATA_DIR/logs/app.log" >&2 || true
   die "the app did not answer on $APP_URL (log: $DATA_DIR/logs/app.log)"

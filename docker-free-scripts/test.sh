@@ -28,7 +28,7 @@ ensure_database "$PGDATABASE"
 migrate_db
 seed_db
 rm -rf "$DATA_DIR/mail"
-start_bg smtp-sink npx tsx server/fakes/smtp-sink/index.ts
+start_bg smtp-sink node --import tsx server/fakes/smtp-sink/index.ts
 wait_port "$SMTP_SINK_PORT" 30 || die "the SMTP sink did not start"
 
 failed=()
@@ -44,7 +44,7 @@ step "unit and API tests" npx vitest run --project unit --project api \
 step "production build" npx vite build --logLevel warn
 
 browser_tests() {
-  start_bg app npx tsx server/index.ts
+  start_bg app node --import tsx server/index.ts
   wait_http "$APP_URL/api/health" 60 || { tail -n 30 "$DATA_DIR/logs/app.log" >&2; return 1; }
   npx vitest run --project browser --reporter=default --reporter=json --outputFile.json="$REPORT_DIR/browser.json"
 }
