@@ -1,0 +1,72 @@
+import type { Page } from 'playwright-core';
+import { expect, test } from 'vitest';
+import { DEMO_PASSWORD, openPage, otherCustomer, pathOf, sel, signInAs, useBrowser, visit } from './support/browser';
+
+const browser = useBrowser();
+
+/** Refreshes the Outbox until a row for `to` appears (mail goes out through a job queue). */
+async function waitForMail(page: Page, to: string, subject: RegExp): Promise<void> {
+  const row = page.locator(sel('outbox-row')).filter({ hasText: to }).filter({ hasText: subject });
+  for (let attempt = 0; attempt < 20; attempt++) {
+    if ((await row.count()) > 0) return;
+    await page.waitForTimeout(750);
+    await page.locator(sel('outbox-refresh')).click();
+    await page.locator('.n-data-table .n-base-loading').waitFor({ state: 'detached' }).catch(() => undefined);
+  }
+  throw new Error(`no e-mail to ${to} matching ${subject} appeared in the Outbox`);
+}
+
+test('admin opens the Outbox from the navigation and reads a password-reset e-mail', async (ctx) => {
+  const anonymous = await openPage(browser(), ctx);
+  await visit(anonymous, '/reset-password');
+  await anonymous.locator(sel('reset-request-email')).fill(otherCustomer.email);
+  await anonymous.locator(sel('reset-request-submit')).click();
+  await anonymous.locator(sel('reset-request-sent')).waitFor();
+
+  const page = await openPage(browser(), ctx);
+  await signInAs(page, 'admin');
+  await page.locator(sel('nav-admin-outbox')).click();
+  await page.locator(sel('outbox-table')).waitFor();
+  expect(pathOf(page)).toBe('/admin/outbox');
+
+  await waitForMail(page, otherCustomer.email, /password/i);
+  await page.locator(sel('outbox-row')).filter({ hasText: otherCustomer.email }).first().click();
+  const detail = page.locator(sel('mail-detail'));
+  await detail.waitFor();
+  expect(await detail.locator(sel('mail-to')).textContent()).toContain(otherCustomer.email);
+  expect(await detail.locator(sel('mail-text')).textContent()).toBeTruthy();
+  const href = await detail.locator(sel('mail-link')).first().getAttribute('href');
+  expect(href).toMatch(/\/reset-password\/confirm\?token=/);
+});
+
+test('admin invites a sales engineer, who registers from the e-mailed link', async (ctx) => {
+  const email = `new-sales-${Date.now()}@aldercreek.example`;
+  const page = await openPage(browser(), ctx);
+  await signInAs(page, 'admin');
+  await page.locator(sel('nav-admin-invitations')).click();
+  await page.locator(sel('invite-form')).waitFor();
+
+  await page.locator(sel('invite-email')).fill(email);
+  await page.locator(sel('invite-role')).click();
+  await page.locator('.n-base-select-option').filter({ hasText: 'Sales engineer' }).click();
+  await page.locator(sel('invite-submit')).click();
+  await page.locator(sel('invite-sent-item')).filter({ hasText: email }).waitFor();
+
+  await page.locator(sel('nav-admin-outbox')).click();
+  await waitForMail(page, email, /invit/i);
+  await page.locator(sel('outbox-row')).filter({ hasText: email }).first().click();
+  const link = await page.locator(sel('mail-link')).filter({ hasText: 'invite=' }).first().getAttribute('href');
+  expect(link).toBeTruthy();
+
+  const invitee = await openPage(browser(), ctx);
+  const url = new URL(link!);
+  await visit(invitee, url.pathname + url.search);
+  await invitee.locator(sel('register-invited')).waitFor();
+  expect(await invitee.locator(sel('register-organization')).count()).toBe(0);
+  await invitee.locator(sel('register-name')).fill('Noor Halvorsen');
+  await invitee.locator(sel('register-email')).fill(email);
+  await invitee.locator(sel('register-password')).fill(DEMO_PASSWORD);
+  await invitee.locator(sel('register-submit')).click();
+  await invitee.locator(sel('home-sales')).waitFor();
+  expect(await invitee.locator(sel('user-name')).textContent()).toBe('Noor Halvorsen');
+});
