@@ -77,5 +77,6 @@ describe('water state problems', () => {
     expect(water.stateProblem(160, 20e5)).toMatch(/Water: 160 °C .* 0 °C to 150 °C/);
     expect(() => water.properties(Number.NaN, 1e5)).toThrow(expect.objectContaining({ code: 'fluid-range' }));
     expect(() => water.properties(20, -1)).toThrow(expect.objectContaining({ code: 'fluid-range' }));
+    expect(water.stateProblem(20, 2e8)).toMatch(/above the 1000 bar limit/);
   });
 });

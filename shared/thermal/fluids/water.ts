@@ -36,6 +36,9 @@ function waterIssue(temp_C: number, pressure_Pa: number): StateIssue | null {
   }
   const basic = basicIssue(info, temp_C, pressure_Pa);
   if (basic) return basic;
+  if (pressure_Pa > 100e6) {
+    return { code: 'fluid-range', message: `Water: ${fmtBar(pressure_Pa)} is above the 1000 bar limit of IAPWS-IF97 region 1.` };
+  }
   if (pressure_Pa < SAT_P_MAX_PA) {
     const tSat_C = pressure_Pa > SAT_P_MIN_PA ? waterSaturationTemperature(pressure_Pa) - 273.15 : 0.01;
     if (temp_C >= tSat_C) {
