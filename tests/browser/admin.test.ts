@@ -1,6 +1,16 @@
 import type { Page } from 'playwright-core';
 import { expect, test } from 'vitest';
-import { DEMO_PASSWORD, openPage, otherCustomer, pathOf, sel, signInAs, useBrowser, visit } from './support/browser';
+import {
+  BASE_URL,
+  DEMO_PASSWORD,
+  openPage,
+  pathOf,
+  sel,
+  signInAs,
+  submitSignIn,
+  useBrowser,
+  visit,
+} from './support/browser';
 
 const browser = useBrowser();
 
@@ -16,10 +26,18 @@ async function waitForMail(page: Page, to: string, subject: RegExp): Promise<voi
   throw new Error(`no e-mail to ${to} matching ${subject} appeared in the Outbox`);
 }
 
-test('admin opens the Outbox from the navigation and reads a password-reset e-mail', async (ctx) => {
+test('admin reads a password-reset e-mail in the Outbox; its link sets a new password', async (ctx) => {
+  // A customer of our own, so the demo accounts keep their passwords.
+  const email = `reset-${Date.now()}@fenwick-air.example`;
   const anonymous = await openPage(browser(), ctx);
+  const created = await anonymous.request.post(`${BASE_URL}/api/auth/register`, {
+    headers: { Origin: BASE_URL, 'X-Requested-With': 'bundlesmith' },
+    data: { name: 'Rosa Ekwueme', email, password: DEMO_PASSWORD, organizationName: `Fenwick Air ${Date.now()}` },
+  });
+  expect(created.status()).toBe(201);
+  await anonymous.context().clearCookies();
   await visit(anonymous, '/reset-password');
-  await anonymous.locator(sel('reset-request-email')).fill(otherCustomer.email);
+  await anonymous.locator(sel('reset-request-email')).fill(email);
   await anonymous.locator(sel('reset-request-submit')).click();
   await anonymous.locator(sel('reset-request-sent')).waitFor();
 
@@ -29,14 +47,30 @@ test('admin opens the Outbox from the navigation and reads a password-reset e-ma
   await page.locator(sel('outbox-table')).waitFor();
   expect(pathOf(page)).toBe('/admin/outbox');
 
-  await waitForMail(page, otherCustomer.email, /password/i);
-  await page.locator(sel('outbox-row')).filter({ hasText: otherCustomer.email }).first().click();
+  await waitForMail(page, email, /password/i);
+  await page.locator(sel('outbox-row')).filter({ hasText: email }).first().click();
   const detail = page.locator(sel('mail-detail'));
   await detail.waitFor();
-  expect(await detail.locator(sel('mail-to')).textContent()).toContain(otherCustomer.email);
+  expect(await detail.locator(sel('mail-to')).textContent()).toContain(email);
   expect(await detail.locator(sel('mail-text')).textContent()).toBeTruthy();
   const href = await detail.locator(sel('mail-link')).first().getAttribute('href');
   expect(href).toMatch(/\/reset-password\/confirm\?token=/);
+
+  const link = new URL(href!);
+  await visit(anonymous, link.pathname + link.search);
+  await anonymous.locator(sel('reset-confirm-password')).fill('a-brand-new-password');
+  await anonymous.locator(sel('reset-confirm-submit')).click();
+  await anonymous.locator(sel('reset-done')).waitFor();
+  await submitSignIn(anonymous, email, 'a-brand-new-password');
+  await anonymous.locator(sel('home-customer')).waitFor();
+
+  // The link works once.
+  await anonymous.locator(sel('sign-out')).click();
+  await anonymous.locator(sel('sign-in-form')).waitFor();
+  await visit(anonymous, link.pathname + link.search);
+  await anonymous.locator(sel('reset-confirm-password')).fill('yet-another-password');
+  await anonymous.locator(sel('reset-confirm-submit')).click();
+  await anonymous.locator(sel('reset-confirm-error')).waitFor();
 });
 
 test('admin invites a sales engineer, who registers from the e-mailed link', async (ctx) => {

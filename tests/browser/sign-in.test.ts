@@ -1,6 +1,17 @@
 import { expect, test } from 'vitest';
 import { roles, type Role } from '../../shared/schemas/auth';
-import { DEMO_PASSWORD, demoUsers, openPage, pathOf, sel, signInAs, submitSignIn, useBrowser, visit } from './support/browser';
+import {
+  DEMO_PASSWORD,
+  demoUsers,
+  openPage,
+  otherCustomer,
+  pathOf,
+  sel,
+  signInAs,
+  submitSignIn,
+  useBrowser,
+  visit,
+} from './support/browser';
 
 const browser = useBrowser();
 
@@ -90,4 +101,26 @@ test('an unknown address shows the not-found page', async (ctx) => {
   await visit(page, '/no/such/page');
   await page.locator(sel('not-found')).waitFor();
   expect(await page.locator(sel('not-found-sign-in')).isVisible()).toBe(true);
+});
+
+test('a customer of another organisation sees their own organisation', async (ctx) => {
+  const page = await openPage(browser(), ctx);
+  await submitSignIn(page, otherCustomer.email, DEMO_PASSWORD);
+  await page.locator(sel('home-customer')).waitFor();
+  expect(await page.locator(sel('user-organization')).textContent()).toBe(otherCustomer.organization);
+});
+
+test('when the session ends on the server, the next request leads to sign-in and back', async (ctx) => {
+  const page = await openPage(browser(), ctx);
+  await signInAs(page, 'admin');
+  await page.locator(sel('nav-admin-outbox')).click();
+  // Wait for the first load to finish: a button that is still loading ignores clicks.
+  await page.locator(`${sel('outbox-row')}, ${sel('outbox-empty')}`).first().waitFor();
+
+  await page.context().clearCookies();
+  await page.locator(sel('outbox-refresh')).click();
+  await page.locator(sel('sign-in-form')).waitFor();
+  expect(new URL(page.url()).searchParams.get('next')).toBe('/admin/outbox');
+  await submitSignIn(page, demoUsers.admin.email, DEMO_PASSWORD);
+  await page.locator(sel('outbox-page')).waitFor();
 });

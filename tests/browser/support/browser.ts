@@ -73,12 +73,12 @@ export async function openPage(
   const context = await browser.newContext({ baseURL: BASE_URL, viewport });
   const page = await context.newPage();
   page.setDefaultTimeout(15_000);
-  ctx.onTestFailed(async () => {
-    mkdirSync(RESULTS_DIR, { recursive: true });
-    const name = ctx.task.name.replace(/[^a-z0-9]+/gi, '-').toLowerCase();
-    await page.screenshot({ path: join(RESULTS_DIR, `${name}.png`), fullPage: true }).catch(() => undefined);
-  });
-  ctx.onTestFinished(async () => {
+  ctx.onTestFinished(async ({ task }) => {
+    if (task.result?.state === 'fail') {
+      mkdirSync(RESULTS_DIR, { recursive: true });
+      const name = task.name.replace(/[^a-z0-9]+/gi, '-').toLowerCase();
+      await page.screenshot({ path: join(RESULTS_DIR, `${name}.png`), fullPage: true }).catch(() => undefined);
+    }
     await context.close();
   });
   return page;
