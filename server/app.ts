@@ -11,6 +11,7 @@ import type { Mailer } from './lib/mail';
 import { sessionMiddleware } from './lib/session';
 import { authRouter } from './features/auth/routes';
 import { verifyCredentials } from './features/auth/service';
+import { fluidsRouter } from './features/fluids/routes';
 import { healthRouter } from './features/health/routes';
 import { adminRouter, organizationsRouter } from './features/organizations/routes';
 import { outboxRouter } from './features/outbox/routes';
@@ -54,6 +55,7 @@ export function createApp({ config, database, mailer, clientDir = defaultClientD
 
   app.use('/api/health', healthRouter(pool));
   app.use('/api/auth', authRouter(deps, pool, passport));
+  app.use('/api/fluids', fluidsRouter());
   app.use('/api/organizations', organizationsRouter(deps));
   app.use('/api/admin', adminRouter(deps));
   app.use('/api/dev', outboxRouter(config.OUTBOX_URL));
