@@ -1,0 +1,4 @@
+export * from './tubes';
+export * from './materials';
+export * from './shells';
+export * from './layout';
