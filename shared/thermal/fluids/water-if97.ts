@@ -15,9 +15,9 @@
 const R_KJ = 0.461526;
 
 // Table 2 of IAPWS R7-97: exponents I, J and coefficients n of region 1.
-const I1 = [0, 0, 0, 0, 0, 0, 0, 0, 1, 1, 1, 1, 1, 1, 2, 2, 2, 2, 2, 3, 3, 3, 4, 4, 4, 5, 8, 8, 21, 23, 29, 30, 31, 32];
-const J1 = [-2, -1, 0, 1, 2, 3, 4, 5, -9, -7, -1, 0, 1, 3, -3, 0, 1, 3, 17, -4, 0, 6, -5, -2, 10, -8, -11, -6, -29, -31, -38, -39, -40, -41];
-const N1 = [
+const I1 = Int32Array.from([0, 0, 0, 0, 0, 0, 0, 0, 1, 1, 1, 1, 1, 1, 2, 2, 2, 2, 2, 3, 3, 3, 4, 4, 4, 5, 8, 8, 21, 23, 29, 30, 31, 32]);
+const J1 = Int32Array.from([-2, -1, 0, 1, 2, 3, 4, 5, -9, -7, -1, 0, 1, 3, -3, 0, 1, 3, 17, -4, 0, 6, -5, -2, 10, -8, -11, -6, -29, -31, -38, -39, -40, -41]);
+const N1 = Float64Array.from([
   0.14632971213167, -0.84548187169114, -3.756360367204, 3.3855169168385, -0.95791963387872, 0.15772038513228,
   -0.016616417199501, 8.1214629983568e-4, 2.8319080123804e-4, -6.0706301565874e-4, -0.018990068218419,
   -0.032529748770505, -0.021841717175414, -5.283835796993e-5, -4.7184321073267e-4, -3.0001780793026e-4,
@@ -25,7 +25,7 @@ const N1 = [
   -8.5205128120103e-10, -2.2425281908e-6, -6.5171222895601e-7, -1.4341729937924e-13, -4.0516996860117e-7,
   -1.2734301741641e-9, -1.7424871230634e-10, -6.8762131295531e-19, 1.4478307828521e-20, 2.6335781662795e-23,
   -1.1947622640071e-23, 1.8228094581404e-24, -9.3537087292458e-26,
-];
+]);
 
 // Integer-power tables, refilled on every call (no state survives a call): powA[k] = a^k for
 // k = 0..32; powB[k + 43] = b^k for k = −43..17 (J − 2 reaches −43).
@@ -39,12 +39,19 @@ export function waterRegion1(temp_K: number, pressure_Pa: number): { density: nu
   const tau = 1386 / temp_K;
   const a = 7.1 - pi;
   const b = tau - 1.222;
+  // Two interleaved chains (step a², b²) halve the dependency length of the power tables.
+  const a2 = a * a;
   powA[0] = 1;
-  for (let k = 1; k < 33; k++) powA[k] = powA[k - 1] * a;
+  powA[1] = a;
+  for (let k = 2; k < 33; k++) powA[k] = powA[k - 2] * a2;
+  const b2 = b * b;
   powB[B0] = 1;
-  for (let k = 1; k <= 17; k++) powB[B0 + k] = powB[B0 + k - 1] * b;
+  powB[B0 + 1] = b;
+  for (let k = 2; k <= 17; k++) powB[B0 + k] = powB[B0 + k - 2] * b2;
   const ib = 1 / b;
-  for (let k = 1; k <= B0; k++) powB[B0 - k] = powB[B0 - k + 1] * ib;
+  const ib2 = ib * ib;
+  powB[B0 - 1] = ib;
+  for (let k = 2; k <= B0; k++) powB[B0 - k] = powB[B0 - k + 2] * ib2;
 
   let gPi = 0;
   let gTauTau = 0;
