@@ -27,6 +27,7 @@ psql -h "$PGHOST" -p "$PGPORT" -U "$PGUSER" -d postgres -qc "drop database if ex
 ensure_database "$PGDATABASE"
 migrate_db
 seed_db
+stop_bg smtp-sink   # a sink left from a run by hand: start afresh with an empty mailbox
 rm -rf "$DATA_DIR/mail"
 start_bg smtp-sink node --import tsx server/fakes/smtp-sink/index.ts
 wait_port "$SMTP_SINK_PORT" 30 || die "the SMTP sink did not start"

@@ -15,6 +15,7 @@ import { fluidsRouter } from './features/fluids/routes';
 import { healthRouter } from './features/health/routes';
 import { adminRouter, organizationsRouter } from './features/organizations/routes';
 import { outboxRouter } from './features/outbox/routes';
+import { thermalRouter } from './features/thermal/routes';
 
 export interface AppDeps {
   config: Config;
@@ -51,11 +52,13 @@ export function createApp({ config, database, mailer, clientDir = defaultClientD
   app.use(express.json({ limit: '1mb' }));
   app.use('/api', sessionMiddleware(config, pool));
   app.use('/api', passport.session());
-  app.use('/api', csrfGuard([config.APP_URL]));
+  // the thermal API is public and stateless: it changes nothing, so it needs no cross-site guard
+  app.use('/api', csrfGuard([config.APP_URL], ['/thermal/rate', '/thermal/size']));
 
   app.use('/api/health', healthRouter(pool));
   app.use('/api/auth', authRouter(deps, pool, passport));
   app.use('/api/fluids', fluidsRouter());
+  app.use('/api/thermal', thermalRouter(pool));
   app.use('/api/organizations', organizationsRouter(deps));
   app.use('/api/admin', adminRouter(deps));
   app.use('/api/dev', outboxRouter(config.OUTBOX_URL));

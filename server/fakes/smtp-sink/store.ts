@@ -25,9 +25,11 @@ export class MailStore {
     this.messages.sort((a, b) => a.receivedAt.localeCompare(b.receivedAt));
   }
 
+  /** Written to disk first: a message that could not be kept is refused, never half-caught. */
   add(message: CaughtMessage) {
-    this.messages.push(message);
+    mkdirSync(this.dir, { recursive: true });
     writeFileSync(join(this.dir, `${message.id}.json`), JSON.stringify(message, null, 2));
+    this.messages.push(message);
   }
 
   /** Newest first, optionally only those addressed to `to`. */
