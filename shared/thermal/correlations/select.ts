@@ -1,6 +1,6 @@
 /** Picks and runs a tube-side method from the one table, for `auto` or a forced choice. */
 import { ThermalInputError, type ThermalWarning } from '../errors';
-import { autoNusselt, autoPlan, correctionMethods, nusseltMethods, rangeWarnings, type ConvectionInputs, type NusseltMethodLabel } from './methods';
+import { autoNusselt, autoPlan, correctionMethods, nusseltMethods, nusseltMethods as methodTable, rangeWarnings, type ConvectionInputs, type NusseltMethodLabel } from './methods';
 import { RE_LAMINAR_LIMIT, RE_TURBULENT_LIMIT } from './transition';
 
 /** The choices a request may make (`correlation` field). */
@@ -56,4 +56,11 @@ export function tubeSideNusselt(i: ConvectionInputs, choice: CorrelationChoice, 
     throw new ThermalInputError('correlation-not-applicable', `${e.name} gives no positive Nusselt number at Re = ${Math.round(i.re)}, Pr = ${i.pr.toPrecision(3)}; choose "auto" or a method for this regime.`, 'correlation');
   }
   return { nusselt, regime, method: label, methodName: e.name, corrections: [], warnings: withWarnings ? rangeWarnings(e, i) : [] };
+}
+
+/** Only the Nusselt number, for iterations (no warnings, no allocation of a result). */
+export function tubeSideNusseltValue(i: ConvectionInputs, choice: CorrelationChoice): number {
+  if (choice === 'auto') return autoNusselt(i);
+  const nu = methodTable[forcedLabel(choice, i.re)].evaluate(i);
+  return nu > 0 && Number.isFinite(nu) ? nu : NaN;
 }

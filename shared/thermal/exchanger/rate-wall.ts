@@ -5,7 +5,7 @@ import type { FluidProperties } from '../fluids';
 import { ENGINEERING_CAUTION, tubeWarnings } from './checks';
 import { solveFixedPoint, memoProperties } from './solve';
 import { condensation, propertiesOrNull, type Stream } from './streams';
-import { entranceLength, tubePressureDrop, tubeSideConvection, tubeVelocity, type Bundle } from './tube-side';
+import { entranceLength, tubePressureDrop, tubeSideConvection, tubeSideH, tubeVelocity, type Bundle } from './tube-side';
 import { ntuWall, outletTempWall } from './wall';
 
 export interface RateOptions {
@@ -31,8 +31,8 @@ export function rateWall(s: Stream, wallTemp_C: number, b: Bundle, choice: Corre
   const next = (tOut: number): number => {
     const tMean = 0.5 * (tIn + tOut);
     const bulk = props(tMean);
-    const conv = tubeSideConvection(b, s.massFlow_kg_s, bulk, wall ?? bulk, tMean, wallTemp_C, s.fluid.phase, choice, false);
-    return outletTempWall(tIn, wallTemp_C, ntuWall(b.dInner, path, conv.h, mTube, effectiveCp(s, bulk, tOut).cp));
+    const h = tubeSideH(b, s.massFlow_kg_s, bulk, wall ?? bulk, tMean, wallTemp_C, s.fluid.phase, choice);
+    return outletTempWall(tIn, wallTemp_C, ntuWall(b.dInner, path, h, mTube, effectiveCp(s, bulk, tOut).cp));
   };
   const span = tIn - wallTemp_C;
   const x = solveFixedPoint(next, wallTemp_C + 0.3 * span, wallTemp_C, tIn, 1e-7 * (1 + span));

@@ -1,5 +1,5 @@
 /** Tube-side convection and pressure drop of a bundle. */
-import { tubeSideNusselt, type CorrelationChoice, type NusseltResult } from '../correlations/select';
+import { tubeSideNusselt, tubeSideNusseltValue, type CorrelationChoice, type NusseltResult } from '../correlations/select';
 import type { FluidPhase, FluidProperties } from '../fluids';
 import { frictionDarcy } from '../friction';
 
@@ -73,6 +73,30 @@ export function tubeSideConvection(
   out.pr = bulk.prandtl;
   out.h = (r.nusselt * bulk.conductivity) / b.dInner;
   return out;
+}
+
+/** The tube-side coefficient alone, W/(m²·K), for iterations (same inputs as `tubeSideConvection`). */
+export function tubeSideH(
+  b: Bundle,
+  massFlow: number,
+  bulk: FluidProperties,
+  wall: FluidProperties,
+  tBulk_C: number,
+  tWall_C: number,
+  phase: FluidPhase,
+  choice: CorrelationChoice,
+): number {
+  const re = reynolds(b, massFlow, bulk.viscosity);
+  const nu = tubeSideNusseltValue(
+    {
+      re, pr: bulk.prandtl, dInner: b.dInner, length: b.length,
+      muRatio: bulk.viscosity / wall.viscosity, prWall: wall.prandtl,
+      tBulk_K: tBulk_C + 273.15, tWall_K: tWall_C + 273.15,
+      heating: tWall_C > tBulk_C, boundary: 'wall', phase,
+    },
+    choice,
+  );
+  return (nu * bulk.conductivity) / b.dInner;
 }
 
 export interface TubePressureDrop {
