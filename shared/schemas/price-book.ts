@@ -1,0 +1,76 @@
+/**
+ * The fabricator's price book: what material, labour and margins cost. Versioned (every save is a
+ * new version; revisions keep the version they were priced with). Money is in integer minor units
+ * (cents) of `currency`. Admins edit it; the pricing service and the sizing search read it.
+ */
+import { z } from 'zod';
+
+const minor = z.int().nonnegative();
+const pct = z.number().min(0).max(100);
+
+export const currencies = ['USD', 'EUR', 'GBP', 'CAD'] as const;
+
+export const priceBookSchema = z.object({
+  currency: z.enum(currencies),
+  /** tube stock per metre, by material id, OD label (`3/4 in`, `20 mm`) and wall label (`BWG 16`, `1.5 mm`) */
+  tubes: z.array(z.object({ material: z.string().min(1), od: z.string().min(1), wall: z.string().min(1), perMetre_minor: minor })).min(1),
+  /** length added to every tube for cutting and expanding, m */
+  tubeCutAllowance_m: z.number().min(0).max(0.3),
+  /** plate per kg by material id (`carbon-steel`, …): tubesheets, baffles, rolled shells */
+  plate: z.array(z.object({ material: z.string().min(1), perKg_minor: minor })).min(1),
+  /** shell pipe per metre by label (`NPS 12 STD`) */
+  shellPipe: z.array(z.object({ label: z.string().min(1), perMetre_minor: minor })),
+  /** a pair of channel heads (bonnets) by the largest shell inner diameter they fit, m */
+  heads: z.array(z.object({ maxShellDiameter_m: z.number().positive(), perPair_minor: minor })).min(1),
+  /** a nozzle with its flange, by largest NPS and flange rating class */
+  nozzles: z.array(z.object({ maxNps: z.number().positive(), rating: z.enum(['150', '300']), each_minor: minor })).min(1),
+  sundries: z.object({ tieRodPerMetre_minor: minor, gasketSet_minor: minor, boltingSet_minor: minor, paintPerM2_minor: minor }),
+  labourHours: z.object({
+    perTubeEnd: z.number().min(0),
+    perBaffle: z.number().min(0),
+    perNozzle: z.number().min(0),
+    fitUp: z.number().min(0),
+    hydrotest: z.number().min(0),
+    paint: z.number().min(0),
+  }),
+  shopRatePerHour_minor: minor,
+  overhead_pct: pct,
+  margin_pct: pct,
+  /** discount on the whole price from this many units up */
+  quantityBreaks: z.array(z.object({ minQuantity: z.int().min(2), discount_pct: pct })),
+  /** surcharge when the need-by date is inside the standard lead time */
+  expedite_pct: pct,
+  standardLeadTimeWeeks: z.int().min(1).max(104),
+  deposit_pct: pct,
+  cancellationFee_pct: pct,
+  offerValidityDays: z.int().min(1).max(365),
+});
+export type PriceBook = z.infer<typeof priceBookSchema>;
+
+export const priceLineGroups = ['material', 'labour', 'overhead', 'margin', 'discount', 'surcharge'] as const;
+
+/** One priced line; `source` says where the rate came from (price-book entry or an override). */
+export const priceLineSchema = z.object({
+  key: z.string(),
+  group: z.enum(priceLineGroups),
+  description: z.string(),
+  quantity: z.number(),
+  unit: z.string(),
+  rate_minor: z.int(),
+  amount_minor: z.int(),
+  source: z.string(),
+  /** present when a sales engineer overrode the computed amount */
+  override: z.object({ computed_minor: z.int(), reason: z.string(), by: z.string() }).optional(),
+});
+export type PriceLine = z.infer<typeof priceLineSchema>;
+
+export const priceSchema = z.object({
+  currency: z.enum(currencies),
+  lines: z.array(priceLineSchema),
+  /** per unit, before quantity */
+  unit_minor: z.int(),
+  quantity: z.int(),
+  total_minor: z.int(),
+  priceBookVersion: z.int(),
+});
+export type Price = z.infer<typeof priceSchema>;

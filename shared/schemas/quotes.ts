@@ -1,0 +1,168 @@
+/**
+ * Quotes: a customer's duty, sized and priced at once, reviewed by a sales engineer, sent as an offer.
+ * Every change makes a new immutable revision that keeps the inputs, the design, the rating, the
+ * price lines and the price-book version, so any offer can be reproduced.
+ */
+import { z } from 'zod';
+import { designSchema, layoutSchema, sizeRequestSchema } from './thermal';
+import { priceSchema } from './price-book';
+import { tubeMaterialIds } from '../thermal/geometry/materials';
+
+/**
+ * in-review: awaiting engineering review (a budget offer is shown) · questions: sent back to the
+ * customer · approved: offer sent · declined · accepted: buyer accepted, deposit unpaid · ordered.
+ */
+export const quoteStatuses = ['in-review', 'questions', 'approved', 'declined', 'accepted', 'ordered'] as const;
+export const quoteStatusSchema = z.enum(quoteStatuses);
+export type QuoteStatus = z.infer<typeof quoteStatusSchema>;
+
+const isoDate = z.iso.date({ error: 'Use a date like 2027-03-31.' });
+
+export const createQuoteSchema = z.object({
+  duty: sizeRequestSchema,
+  quantity: z.int({ error: 'Enter a whole number of units.' }).min(1).max(500),
+  needBy: isoDate.optional(),
+  notes: z.string().trim().max(4000).optional(),
+  /** the customer's own tag, e.g. the compressor package it serves */
+  reference: z.string().trim().max(120).optional(),
+});
+export type CreateQuoteInput = z.input<typeof createQuoteSchema>;
+
+/** Geometry a sales engineer sets by hand; it is rated as given (not re-sized). */
+export const designEditSchema = z.object({
+  tubeCount: z.int().min(1).max(20000),
+  tubeLength_m: z.number().positive().max(12),
+  tubeOuterDiameter_m: z.number().positive().max(0.1),
+  tubeWall_m: z.number().positive().max(0.01),
+  tubeMaterial: z.enum(tubeMaterialIds),
+  tubePasses: z.int().min(1).max(8),
+  layout: layoutSchema,
+  shellInnerDiameter_m: z.number().positive().max(3),
+  baffleSpacing_m: z.number().positive().max(5).optional(),
+});
+export type DesignEdit = z.infer<typeof designEditSchema>;
+
+export const priceOverrideSchema = z.object({
+  key: z.string().min(1),
+  amount_minor: z.int(),
+  reason: z.string().trim().min(3, { error: 'Say why the computed price is overridden.' }).max(500),
+});
+
+export const patchQuoteSchema = z
+  .object({
+    version: z.int().min(1),
+    duty: sizeRequestSchema.optional(),
+    design: designEditSchema.optional(),
+    priceOverrides: z.array(priceOverrideSchema).max(50).optional(),
+    quantity: z.int().min(1).max(500).optional(),
+    internalNote: z.string().trim().min(1).max(4000).optional(),
+  })
+  .refine((p) => !(p.duty && p.design), { error: 'Change the duty or the design, not both at once.', path: ['design'] });
+export type PatchQuoteInput = z.input<typeof patchQuoteSchema>;
+
+export const approveQuoteSchema = z.object({ version: z.int().min(1), message: z.string().trim().max(4000).optional() });
+export const reasonSchema = z.object({
+  version: z.int().min(1).optional(),
+  message: z.string().trim().min(3, { error: 'Write a few words.' }).max(4000),
+});
+
+export const listQuotesQuerySchema = z.object({
+  status: quoteStatusSchema.optional(),
+  q: z.string().trim().max(100).optional(),
+  assignee: z.union([z.literal('me'), z.literal('none'), z.uuid()]).optional(),
+  page: z.coerce.number().int().min(1).default(1),
+  pageSize: z.coerce.number().int().min(1).max(100).default(20),
+  sort: z
+    .enum(['created', '-created', 'updated', '-updated', 'value', '-value', 'needBy', '-needBy', 'number', '-number'])
+    .default('-updated'),
+});
+export type ListQuotesQuery = z.infer<typeof listQuotesQuerySchema>;
+
+/** What one revision froze. */
+export const revisionSchema = z.object({
+  number: z.int(),
+  kind: z.enum(['budget', 'draft', 'offer']),
+  createdAt: z.string(),
+  createdBy: z.string(),
+  duty: sizeRequestSchema,
+  design: designSchema,
+  alternatives: z.array(designSchema.omit({ rating: true })),
+  price: priceSchema,
+  leadTimeWeeks: z.int(),
+  /** set on an offer: until when it may be accepted */
+  validUntil: z.string().optional(),
+});
+export type Revision = z.infer<typeof revisionSchema>;
+
+// ---- responses ----
+
+const person = z.object({ id: z.uuid(), name: z.string() });
+
+export const quoteSummarySchema = z.object({
+  id: z.uuid(),
+  /** shown to people: `Q-2026-0042` */
+  number: z.string(),
+  status: quoteStatusSchema,
+  /** optimistic-lock version: send it back with every change; a stale one gets 409 */
+  version: z.int(),
+  organizationId: z.uuid(),
+  organizationName: z.string(),
+  reference: z.string().nullable(),
+  quantity: z.int(),
+  needBy: z.string().nullable(),
+  validUntil: z.string().nullable(),
+  /** true when an approved offer is past its validity date */
+  expired: z.boolean(),
+  priceTotal_minor: z.int(),
+  currency: z.string(),
+  submittedBy: person,
+  assignee: person.nullable(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+  /** when the fabricator promised a response (created + response target) */
+  responseDueAt: z.string(),
+  /** one-line summary of the design: `212 × 3/4 in BWG 16 copper, 2.4 m, 2 passes` */
+  designSummary: z.string(),
+});
+export type QuoteSummary = z.infer<typeof quoteSummarySchema>;
+
+export const attachmentSchema = z.object({
+  id: z.uuid(),
+  filename: z.string(),
+  contentType: z.string(),
+  size: z.int(),
+  sha256: z.string(),
+  uploadedBy: z.string(),
+  createdAt: z.string(),
+});
+export type Attachment = z.infer<typeof attachmentSchema>;
+
+export const quoteEventSchema = z.object({
+  id: z.uuid(),
+  kind: z.string(),
+  message: z.string().nullable(),
+  /** internal notes and audit entries are shown to staff only */
+  internal: z.boolean(),
+  actor: z.object({ name: z.string(), role: z.string() }).nullable(),
+  createdAt: z.string(),
+});
+
+export const quoteDetailSchema = quoteSummarySchema.extend({
+  notes: z.string().nullable(),
+  revision: revisionSchema,
+  revisions: z.array(z.object({ number: z.int(), kind: z.enum(['budget', 'draft', 'offer']), createdAt: z.string(), createdBy: z.string(), total_minor: z.int() })),
+  /** for a budget offer (in review): the range the final price is expected in */
+  budgetRange: z.object({ low_minor: z.int(), high_minor: z.int() }).nullable(),
+  attachments: z.array(attachmentSchema),
+  events: z.array(quoteEventSchema),
+  /** what the signed-in user may do now */
+  can: z.object({ edit: z.boolean(), approve: z.boolean(), decline: z.boolean(), requestChange: z.boolean(), accept: z.boolean() }),
+});
+export type QuoteDetail = z.infer<typeof quoteDetailSchema>;
+
+export const quoteListSchema = z.object({
+  items: z.array(quoteSummarySchema),
+  total: z.int(),
+  page: z.int(),
+  pageSize: z.int(),
+});
