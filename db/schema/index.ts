@@ -2,3 +2,4 @@ export * from './organizations';
 export * from './users';
 export * from './auth-tokens';
 export * from './sessions';
+export * from './quotes';
