@@ -3,3 +3,4 @@ export * from './users';
 export * from './auth-tokens';
 export * from './sessions';
 export * from './quotes';
+export * from './price-books';
