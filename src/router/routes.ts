@@ -44,6 +44,13 @@ export const routes: RouteRecordRaw[] = [
         meta: { title: 'Home', nav: { label: 'Home', order: 0 } },
       },
       {
+        // Public: anyone may size a cooler; every role sees it in the menu.
+        path: 'size',
+        name: 'sizing',
+        component: () => import('../views/sizing/index.vue'),
+        meta: { public: true, title: 'Size a cooler', nav: { label: 'Size a cooler', order: 10 } },
+      },
+      {
         path: 'admin/invitations',
         name: 'admin-invitations',
         component: () => import('../views/admin/invitations/index.vue'),
