@@ -1,0 +1,92 @@
+import type { Page } from 'playwright-core';
+import { expect, test } from 'vitest';
+import { desktop, openPage, pathOf, phone, sel, useBrowser, visit } from './support/browser';
+
+const browser = useBrowser();
+
+/** Types into a quantity field the way a person does (select all, type, leave the field). */
+async function setNumber(page: Page, field: string, value: number): Promise<void> {
+  const input = page.locator(sel(field));
+  await input.fill(String(value));
+  await input.blur();
+}
+
+/** Width and height of the chart's canvas inside a figure. */
+async function canvasSize(page: Page, chart: string): Promise<{ width: number; height: number }> {
+  const box = await page.locator(`${sel(chart)} canvas`).boundingBox();
+  return { width: box?.width ?? 0, height: box?.height ?? 0 };
+}
+
+test('an anonymous visitor sizes a cooler: design, alternatives and both plots', async (ctx) => {
+  const page = await openPage(browser(), ctx, desktop);
+  await visit(page, '/size');
+  await page.locator(sel('sizing-form')).waitFor();
+  expect(pathOf(page)).toBe('/size'); // public: no detour to sign-in
+  await page.locator(sel('sizing-guest')).waitFor();
+
+  await setNumber(page, 'process-flow', 2.8);
+  await setNumber(page, 'coolant-inlet', 25);
+  // The browser's own preview answers before the server is asked.
+  await page.locator(sel('preview-tubes')).waitFor();
+  expect(Number(await page.locator(sel('preview-tubes')).textContent())).toBeGreaterThan(0);
+
+  await page.locator(sel('size-it')).click();
+  await page.locator(sel('sizing-design')).waitFor();
+  expect(Number(await page.locator(sel('design-tube-count')).textContent())).toBeGreaterThan(0);
+  expect(await page.locator(sel('design-tube-length')).textContent()).toMatch(/^\d+(\.\d+)? m$/);
+  expect(await page.locator(sel('design-correlation')).textContent()).not.toBe('');
+  expect(await page.locator(sel('sizing-caution')).textContent()).toMatch(/pressure-vessel code/);
+
+  const rows = page.locator(`${sel('sizing-alternatives')} ${sel('alternative-row')}`);
+  expect(await rows.count()).toBeGreaterThan(0);
+  expect(await rows.first().getAttribute('data-rank')).toBe('1');
+
+  for (const chart of ['chart-profile', 'chart-cost']) {
+    const size = await canvasSize(page, chart);
+    expect(size.width, chart).toBeGreaterThan(100);
+    expect(size.height, chart).toBeGreaterThan(100);
+  }
+  expect(await page.locator(sel('sizing-explanation')).count()).toBe(0);
+});
+
+test('a target outlet below the coolant inlet gets an explanation, not a result', async (ctx) => {
+  const page = await openPage(browser(), ctx, desktop);
+  await visit(page, '/size');
+  await page.locator(sel('sizing-form')).waitFor();
+  await setNumber(page, 'coolant-inlet', 27);
+  await setNumber(page, 'process-outlet', 20);
+  await page.locator(sel('preview-refused')).waitFor();
+
+  await page.locator(sel('size-it')).click();
+  const explanation = page.locator(sel('sizing-explanation'));
+  await explanation.waitFor();
+  expect(await explanation.textContent()).toMatch(/coolant/i);
+  expect(await page.locator(sel('sizing-design')).count()).toBe(0);
+  expect(await page.locator(sel('sizing-alternatives')).count()).toBe(0);
+  // The field the physics is about is marked.
+  expect(await page.locator(`${sel('process-outlet-item')} .n-form-item-feedback`).textContent()).toMatch(/explanation/);
+});
+
+test('the US toggle converts every field and sizes the same duty', async (ctx) => {
+  const page = await openPage(browser(), ctx, desktop);
+  await visit(page, '/size');
+  await page.locator(sel('sizing-form')).waitFor();
+  await page.locator(sel('unit-us')).click();
+  expect(await page.locator(sel('process-inlet')).inputValue()).toBe('161.6'); // 72 °C
+  await page.locator(sel('size-it')).click();
+  await page.locator(sel('sizing-design')).waitFor();
+  expect(await page.locator(sel('design-tube-length')).textContent()).toMatch(/ ft$/);
+  expect(await page.locator(sel('design-outlet')).textContent()).toMatch(/°F$/);
+});
+
+test('at phone width the panels stack and the result still shows', async (ctx) => {
+  const page = await openPage(browser(), ctx, phone);
+  await visit(page, '/size');
+  const process = await page.locator(sel('sizing-process')).boundingBox();
+  const cooling = await page.locator(sel('sizing-cooling')).boundingBox();
+  expect(cooling!.y).toBeGreaterThan(process!.y + process!.height - 1);
+  await page.locator(sel('size-it')).click();
+  await page.locator(sel('sizing-design')).waitFor();
+  const width = await page.evaluate(() => document.documentElement.scrollWidth);
+  expect(width).toBeLessThanOrEqual(390);
+});
