@@ -1,0 +1,140 @@
+/**
+ * Bill of materials of one cooler: what the shop buys and the hours it spends, with quantities in
+ * the units the price book charges (m, kg, each, pair, set, m², h). Book-independent except for
+ * the cut allowance and the labour hours per operation, which are the shop's own figures.
+ */
+import type { PriceBook } from '../../../shared/schemas/price-book';
+import type { Design } from '../../../shared/schemas/thermal';
+import type { CostInput } from '../../../shared/thermal/cost-proxy';
+import { PIPE_SHELLS, tieRodCount, tubeSizeOf } from '../../../shared/thermal/geometry';
+import {
+  BAFFLE_AREA_FRACTION, baffleCount, baffleThickness_m, discMass, nozzleNpsByFlow, nozzleNpsByShell, paintArea_m2,
+  plateDensity, plateGrades, rolledShellMass, round2, shellLength_m, tubesheetDiameter_m, tubesheetThickness_m,
+} from './bom-rules';
+import { demoPriceBook } from './demo-price-book';
+import { noPrice } from './errors';
+
+export type FlangeClass = '150' | '300';
+
+/** The price-book entry a BOM item is priced from. */
+export type BomRef =
+  | { kind: 'tube'; material: string; od: string; wall: string }
+  | { kind: 'plate'; material: string }
+  | { kind: 'shell-pipe'; label: string }
+  | { kind: 'heads'; shellDiameter_m: number }
+  | { kind: 'nozzle'; nps: number; rating: FlangeClass }
+  | { kind: 'sundry'; item: keyof PriceBook['sundries'] }
+  | { kind: 'labour'; op: keyof PriceBook['labourHours'] };
+
+export interface BomItem {
+  key: string;
+  group: 'material' | 'labour';
+  description: string;
+  quantity: number;
+  unit: string;
+  ref: BomRef;
+}
+
+/** A sizing candidate (CostInput) or a full Design; labels and rating are used when present. */
+export type BomInput = CostInput & Partial<Pick<Design, 'tubeWallLabel' | 'shellLabel' | 'tubePasses' | 'tubePitch_m' | 'rating'>>;
+
+export type BomRules = Pick<PriceBook, 'tubeCutAllowance_m' | 'labourHours'>;
+
+export interface BomOptions {
+  /** flange class of the four nozzles; default '150' */
+  flangeClass?: FlangeClass;
+}
+
+/** Catalogue labels of the tube (`3/4 in`, `BWG 16`); a tube outside the catalogue cannot be priced. */
+export function tubeLabels(d: Pick<BomInput, 'tubeOuterDiameter_m' | 'tubeWall_m' | 'tubeWallLabel'>): { od: string; wall: string } {
+  const size = tubeSizeOf(d.tubeOuterDiameter_m);
+  if (!size) throw noPrice(`tubes of ${(d.tubeOuterDiameter_m * 1000).toFixed(2)} mm OD (not a catalogue size)`);
+  const wall = d.tubeWallLabel ?? size.walls.find((w) => Math.abs(w.wall_m - d.tubeWall_m) < 1e-6)?.label;
+  if (!wall) throw noPrice(`tubes ${size.label} with a ${(d.tubeWall_m * 1000).toFixed(3)} mm wall (not a catalogue gauge)`);
+  return { od: size.label, wall };
+}
+
+export interface ShellSpec {
+  label: string;
+  kind: 'pipe' | 'rolled';
+  innerDiameter_m: number;
+  wall_m: number;
+}
+
+/** The shell by label, else by inner diameter (pipe within 0.5 mm), else rolled plate with a 10 mm wall. */
+export function shellSpec(d: Pick<BomInput, 'shellInnerDiameter_m' | 'shellWall_m' | 'shellLabel'>): ShellSpec {
+  const ds = d.shellInnerDiameter_m;
+  if (!ds) throw noPrice('a design without a shell diameter (nothing to price the shell, heads and tubesheets by)');
+  const pipe = PIPE_SHELLS.find((s) => (d.shellLabel ? s.label === d.shellLabel : Math.abs(s.innerDiameter_m - ds) < 5e-4));
+  if (pipe) return { label: pipe.label, kind: 'pipe', innerDiameter_m: ds, wall_m: d.shellWall_m ?? pipe.wall_m };
+  if (d.shellLabel?.startsWith('NPS')) return { label: d.shellLabel, kind: 'pipe', innerDiameter_m: ds, wall_m: d.shellWall_m ?? 0.0095 };
+  return { label: d.shellLabel ?? `rolled ${Math.round(ds * 1000)} mm ID`, kind: 'rolled', innerDiameter_m: ds, wall_m: d.shellWall_m ?? 0.01 };
+}
+
+/** Nozzle NPS of each side: from the rated flows when the design carries a rating, else by shell size. */
+export function nozzleSizes(d: BomInput, ds: number): { tube: number; shell: number; basis: 'flow' | 'shell size' } {
+  const r = d.rating;
+  const byShell = nozzleNpsByShell(ds);
+  if (!r || !d.tubePasses) return { tube: byShell, shell: byShell, basis: 'shell size' };
+  const di = d.tubeOuterDiameter_m - 2 * d.tubeWall_m;
+  const tubeFlow = r.velocity_m_s * (d.tubeCount / d.tubePasses) * (Math.PI / 4) * di * di;
+  const tube = nozzleNpsByFlow(tubeFlow, r.velocity_m_s);
+  // Kern's cross-flow area D_s B (p − d_o)/p for the shell stream
+  const { shellVelocity_m_s: vs } = r;
+  const shell = vs && d.baffleSpacing_m && d.tubePitch_m
+    ? nozzleNpsByFlow(vs * ds * d.baffleSpacing_m * ((d.tubePitch_m - d.tubeOuterDiameter_m) / d.tubePitch_m), vs)
+    : byShell;
+  return { tube, shell, basis: 'flow' };
+}
+
+const mm = (m: number) => `${Math.round(m * 1000)} mm`;
+
+export function billOfMaterials(d: BomInput, rules: BomRules = demoPriceBook, opts: BomOptions = {}): BomItem[] {
+  const flangeClass = opts.flangeClass ?? '150';
+  const tube = tubeLabels(d);
+  const shell = shellSpec(d);
+  const ds = shell.innerDiameter_m;
+  const n = d.tubeCount;
+  const grades = plateGrades(d.tubeMaterial);
+  const tts = tubesheetThickness_m(ds);
+  const dts = tubesheetDiameter_m(ds);
+  const shellLen = shellLength_m(d.tubeLength_m, ds);
+  const baffles = baffleCount(d.tubeLength_m, d.baffleSpacing_m);
+  const tb = baffleThickness_m(ds);
+  const noz = nozzleSizes(d, ds);
+  const h = rules.labourHours;
+  const items: BomItem[] = [];
+  const mat = (key: string, description: string, quantity: number, unit: string, ref: BomRef) =>
+    quantity > 0 && items.push({ key, group: 'material', description, quantity, unit, ref });
+  const lab = (key: string, description: string, hours: number, op: keyof BomRules['labourHours']) =>
+    hours > 0 && items.push({ key, group: 'labour', description, quantity: round2(hours), unit: 'h', ref: { kind: 'labour', op } });
+
+  mat('tubes', `Tubes ${d.tubeMaterial} ${tube.od} ${tube.wall}: ${n} × (${d.tubeLength_m} m + ${rules.tubeCutAllowance_m} m cut allowance)`,
+    round2(n * (d.tubeLength_m + rules.tubeCutAllowance_m)), 'm', { kind: 'tube', material: d.tubeMaterial, ...tube });
+  mat('tubesheets', `Tubesheets ${grades.tubesheets}: 2 × ⌀${mm(dts)} × ${mm(tts)} (estimating thickness; the code calculation sets the real one)`,
+    round2(2 * discMass(dts, tts, plateDensity(grades.tubesheets))), 'kg', { kind: 'plate', material: grades.tubesheets });
+  mat('baffles', `Baffles ${grades.baffles}: ${baffles} × segmental (0.8 of ⌀${mm(ds)}) × ${mm(tb)}`,
+    round2(baffles * BAFFLE_AREA_FRACTION * discMass(ds, tb, plateDensity(grades.baffles))), 'kg', { kind: 'plate', material: grades.baffles });
+  if (shell.kind === 'pipe') {
+    mat('shell', `Shell pipe ${shell.label}: ${round2(shellLen)} m between tubesheets`, round2(shellLen), 'm', { kind: 'shell-pipe', label: shell.label });
+  } else {
+    mat('shell', `Shell rolled from carbon-steel plate, ${shell.label} × ${mm(shell.wall_m)} wall, ${round2(shellLen)} m`,
+      round2(rolledShellMass(ds, shell.wall_m, shellLen)), 'kg', { kind: 'plate', material: 'carbon-steel' });
+  }
+  mat('heads', `Channel heads (bonnets) for a ${mm(ds)} shell`, 1, 'pair', { kind: 'heads', shellDiameter_m: ds });
+  mat('nozzles-tube', `Tube-side nozzles NPS ${noz.tube} class ${flangeClass} (in + out; by ${noz.basis})`, 2, 'each', { kind: 'nozzle', nps: noz.tube, rating: flangeClass });
+  mat('nozzles-shell', `Shell-side nozzles NPS ${noz.shell} class ${flangeClass} (in + out; by ${noz.basis})`, 2, 'each', { kind: 'nozzle', nps: noz.shell, rating: flangeClass });
+  const rods = tieRodCount(ds);
+  mat('tie-rods', `Tie rods: ${rods} × ${round2(shellLen)} m`, round2(rods * shellLen), 'm', { kind: 'sundry', item: 'tieRodPerMetre_minor' });
+  mat('gaskets', 'Gasket set (two head gaskets)', 1, 'set', { kind: 'sundry', item: 'gasketSet_minor' });
+  mat('bolting', 'Bolting set (studs and nuts of both heads)', 1, 'set', { kind: 'sundry', item: 'boltingSet_minor' });
+  mat('paint', 'Paint, outside of shell and heads', round2(paintArea_m2(ds, shell.wall_m, shellLen)), 'm²', { kind: 'sundry', item: 'paintPerM2_minor' });
+
+  lab('labour-tube-ends', `Expand tube ends: 2 × ${n} ends × ${h.perTubeEnd} h`, 2 * n * h.perTubeEnd, 'perTubeEnd');
+  lab('labour-baffles', `Baffles: ${baffles} × ${h.perBaffle} h`, baffles * h.perBaffle, 'perBaffle');
+  lab('labour-nozzles', `Nozzles: 4 × ${h.perNozzle} h`, 4 * h.perNozzle, 'perNozzle');
+  lab('labour-fit-up', 'Fit-up and assembly', h.fitUp, 'fitUp');
+  lab('labour-hydrotest', 'Hydrostatic test', h.hydrotest, 'hydrotest');
+  lab('labour-paint', 'Painting', h.paint, 'paint');
+  return items;
+}

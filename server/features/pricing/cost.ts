@@ -1,0 +1,94 @@
+/**
+ * The sizing search's cost function from a price book: the per-unit price in minor units (before
+ * quantity breaks and expedite), computed with the same estimating rules as the itemised price but
+ * without rounding, strings or line objects: the search calls it for every candidate. Nozzles are
+ * sized by shell size here (a candidate has no rating yet). A candidate the book cannot price costs
+ * Infinity, so it ranks last; this function never throws.
+ */
+import type { PriceBook } from '../../../shared/schemas/price-book';
+import type { CostInput } from '../../../shared/thermal/cost-proxy';
+import { PIPE_SHELLS, tieRodCount, TUBE_SIZES } from '../../../shared/thermal/geometry';
+import {
+  BAFFLE_AREA_FRACTION, baffleCount, baffleThickness_m, nozzleNpsByShell, paintArea_m2, plateDensity,
+  plateGrades, rolledShellMass, tubesheetDiameter_m, tubesheetThickness_m,
+} from './bom-rules';
+import { indexBook } from './book-index';
+
+const tubeKey = (od: number, wall: number) => Math.round(od * 1e5) * 1e5 + Math.round(wall * 1e6);
+const shellKey = (ds: number) => Math.round(ds * 1e4);
+
+interface PlateCost { sheetPerKg: number; sheetRho: number; bafflePerKg: number; baffleRho: number }
+interface ShellCost { fixed: number; pipePerMetre?: number; wall: number; tts: number; sheetDiscArea: number; baffleDiscArea: number; rods: number }
+
+export function costFromPriceBook(book: PriceBook): (d: CostInput) => number {
+  const ix = indexBook(book);
+  const s = book.sundries;
+  const h = book.labourHours;
+  const rate = book.shopRatePerHour_minor;
+  const markup = (1 + book.overhead_pct / 100) * (1 + book.margin_pct / 100);
+  const fixedLabour = (4 * h.perNozzle + h.fitUp + h.hydrotest + h.paint) * rate;
+  const csPerKg = ix.plate('carbon-steel') ?? Infinity;
+
+  // tube rate by material, then by numeric OD/wall key
+  const tubes = new Map<string, Map<number, number>>();
+  for (const row of book.tubes) {
+    const size = TUBE_SIZES.find((t) => t.label === row.od);
+    const wall = size?.walls.find((w) => w.label === row.wall);
+    if (!size || !wall) continue;
+    let m = tubes.get(row.material);
+    if (!m) tubes.set(row.material, (m = new Map()));
+    m.set(tubeKey(size.outerDiameter_m, wall.wall_m), row.perMetre_minor);
+  }
+  const plates = new Map<string, PlateCost>();
+  const plateCost = (material: string): PlateCost => {
+    let p = plates.get(material);
+    if (!p) {
+      const g = plateGrades(material);
+      p = { sheetPerKg: ix.plate(g.tubesheets) ?? Infinity, sheetRho: plateDensity(g.tubesheets), bafflePerKg: ix.plate(g.baffles) ?? Infinity, baffleRho: plateDensity(g.baffles) };
+      plates.set(material, p);
+    }
+    return p;
+  };
+  const shells = new Map<number, ShellCost>();
+  const shellCost = (ds: number): ShellCost => {
+    const key = shellKey(ds);
+    let c = shells.get(key);
+    if (!c) {
+      const pipe = PIPE_SHELLS.find((p) => Math.abs(p.innerDiameter_m - ds) < 5e-4);
+      const nozzle = ix.nozzle(nozzleNpsByShell(ds), '150')?.each_minor ?? Infinity;
+      const heads = ix.heads(ds)?.perPair_minor ?? Infinity;
+      const dts = tubesheetDiameter_m(ds);
+      c = {
+        fixed: heads + 4 * nozzle + s.gasketSet_minor + s.boltingSet_minor,
+        // a pipe shell without a book row is unpriceable; a rolled shell is priced by plate mass
+        pipePerMetre: pipe ? (ix.shellPipe(pipe.label) ?? Infinity) : undefined,
+        wall: pipe?.wall_m ?? 0.01,
+        tts: tubesheetThickness_m(ds),
+        sheetDiscArea: (Math.PI / 4) * dts * dts,
+        baffleDiscArea: BAFFLE_AREA_FRACTION * (Math.PI / 4) * ds * ds,
+        rods: tieRodCount(ds),
+      };
+      shells.set(key, c);
+    }
+    return c;
+  };
+
+  return (d) => {
+    const ds = d.shellInnerDiameter_m;
+    const tubeRate = tubes.get(d.tubeMaterial)?.get(tubeKey(d.tubeOuterDiameter_m, d.tubeWall_m));
+    if (!ds || tubeRate === undefined) return Infinity;
+    const c = shellCost(ds);
+    const p = plateCost(d.tubeMaterial);
+    const len = d.tubeLength_m - 2 * c.tts;
+    const baffles = baffleCount(d.tubeLength_m, d.baffleSpacing_m);
+    const wall = d.shellWall_m ?? c.wall;
+    const shell = c.pipePerMetre === undefined ? rolledShellMass(ds, wall, len) * csPerKg : c.pipePerMetre * len;
+    const material =
+      d.tubeCount * (d.tubeLength_m + book.tubeCutAllowance_m) * tubeRate +
+      2 * c.sheetDiscArea * c.tts * p.sheetRho * p.sheetPerKg +
+      baffles * c.baffleDiscArea * baffleThickness_m(ds) * p.baffleRho * p.bafflePerKg +
+      shell + c.fixed + c.rods * len * s.tieRodPerMetre_minor + paintArea_m2(ds, wall, len) * s.paintPerM2_minor;
+    const labour = (2 * d.tubeCount * h.perTubeEnd + baffles * h.perBaffle) * rate + fixedLabour;
+    return (material + labour) * markup;
+  };
+}
