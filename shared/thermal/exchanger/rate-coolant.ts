@@ -15,7 +15,7 @@ import { effectiveCp, type RateOptions } from './rate-wall';
 import { memoProperties, solveFixedPoint } from './solve';
 import { shellPressureDropKern, shellSideKern, shellWarnings, type ShellGeometry } from './shell-side';
 import { propertiesOrNull, type Stream } from './streams';
-import { entranceLength, tubePressureDrop, tubeSideConvection, tubeVelocity, type Bundle } from './tube-side';
+import { entranceLength, tubePressureDrop, tubeSideConvection, tubeSideH, tubeVelocity, type Bundle } from './tube-side';
 
 /** 0.75: below this F a single shell is refused; more shells in series are needed (common practice). */
 export const MIN_LMTD_CORRECTION = 0.75;
@@ -62,6 +62,7 @@ export function rateCoolant(
   st = step(true);
   tHout = st.tHout;
   tCout = st.tCout;
+  const conv = st.conv!;
 
   const problem = c.fluid.stateProblem(tCout, c.pressure_Pa);
   if (problem) {
@@ -81,7 +82,7 @@ export function rateCoolant(
   const velocity = tubeVelocity(b, s.massFlow_kg_s, st.hot.density);
   const shellDp = shellPressureDropKern(shell, st.shell, b.length, st.cold, st.muWallShell);
   const warnings = [
-    ...st.conv.warnings,
+    ...conv.warnings,
     ...tubeWarnings(s, b, velocity, dp.total_Pa),
     ...shellWarnings(shell, st.shell, c.fluid.phase === 'liquid'),
   ];
@@ -89,16 +90,16 @@ export function rateCoolant(
   const result: RateResult = {
     outletTemp_C: tHout,
     duty_W: st.q,
-    regime: st.conv.regime,
-    correlation: st.conv.method,
-    correlationName: st.conv.methodName,
-    corrections: st.conv.corrections,
-    reynolds: st.conv.re,
-    prandtl: st.conv.pr,
-    nusselt: st.conv.nusselt,
-    htc_W_m2K: st.conv.h,
+    regime: conv.regime,
+    correlation: conv.method,
+    correlationName: conv.methodName,
+    corrections: conv.corrections,
+    reynolds: conv.re,
+    prandtl: conv.pr,
+    nusselt: conv.nusselt,
+    htc_W_m2K: conv.h,
     velocity_m_s: velocity,
-    entranceLength_m: entranceLength(st.conv.re, st.conv.pr, b.dInner),
+    entranceLength_m: entranceLength(conv.re, conv.pr, b.dInner),
     frictionFactor: dp.frictionFactor,
     pressureDrop: { friction_Pa: dp.friction_Pa, returns_Pa: dp.returns_Pa, nozzles_Pa: dp.nozzles_Pa, total_Pa: dp.total_Pa },
     bulkMeanTemp_C: 0.5 * (tHin + tHout),
@@ -130,9 +131,10 @@ export function rateCoolant(
     const cold = coldProps(tCm);
     const wallIn = propertiesOrNull(s, tWi) ?? hot;
     const muWallShell = (propertiesOrNull(c, tWo) ?? cold).viscosity;
-    const conv = tubeSideConvection(b, s.massFlow_kg_s, hot, wallIn, tHm, tWi, s.fluid.phase, choice, withWarnings);
+    const conv = withWarnings ? tubeSideConvection(b, s.massFlow_kg_s, hot, wallIn, tHm, tWi, s.fluid.phase, choice, true) : null;
+    const hIn = conv ? conv.h : tubeSideH(b, s.massFlow_kg_s, hot, wallIn, tHm, tWi, s.fluid.phase, choice);
     const shellSide = shellSideKern(shell, b.dOuter, c.massFlow_kg_s, cold, muWallShell);
-    const u = overallCoefficientOutside(conv.h, shellSide.h, b.dInner, b.dOuter, b.kWall, fouling.inside, fouling.outside);
+    const u = overallCoefficientOutside(hIn, shellSide.h, b.dInner, b.dOuter, b.kWall, fouling.inside, fouling.outside);
     const cpH = effectiveCp(s, hot, tHout);
     const ch = s.massFlow_kg_s * cpH.cp;
     const cc = c.massFlow_kg_s * cold.specificHeat;
@@ -142,7 +144,7 @@ export function rateCoolant(
     const eps = effectiveness(ntu, cr, b.passes);
     const q = eps * cmin * (tHin - tCin);
     const rTotal = 1 / u;
-    const rIn = b.dOuter / (b.dInner * conv.h);
+    const rIn = b.dOuter / (b.dInner * hIn);
     const dtMean = tHm - tCm;
     return {
       tHout: tHin - q / ch, tCout: tCin + q / cc,

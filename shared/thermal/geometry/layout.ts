@@ -111,15 +111,27 @@ function pickTieRods(x: number[], y: number[], count: number): Uint8Array {
   return tie;
 }
 
-const cache = new Map<string, TubeLayout>();
+/** shell ID → OD → pitch → layout·10 + passes: numeric keys, no string building on the hot path */
+const cache = new Map<number, Map<number, Map<number, Map<number, TubeLayout>>>>();
+
+function cacheSlot(k: TubeLayoutKey): Map<number, TubeLayout> {
+  let a = cache.get(k.shellInnerDiameter_m);
+  if (!a) cache.set(k.shellInnerDiameter_m, (a = new Map()));
+  let b = a.get(k.tubeOuterDiameter_m);
+  if (!b) a.set(k.tubeOuterDiameter_m, (b = new Map()));
+  let c = b.get(k.tubePitch_m);
+  if (!c) b.set(k.tubePitch_m, (c = new Map()));
+  return c;
+}
 
 /**
  * Lays out the hole centres. Four lattice offsets (0 or half a basis step in each direction) are
  * tried and the one holding most holes kept (ties: the first), so the result is deterministic.
  */
 export function tubeLayout(k: TubeLayoutKey): TubeLayout {
-  const key = `${k.shellInnerDiameter_m.toFixed(5)}|${k.tubeOuterDiameter_m.toFixed(6)}|${k.tubePitch_m.toFixed(6)}|${k.layout}|${k.tubePasses}`;
-  const hit = cache.get(key);
+  const slot = cacheSlot(k);
+  const key = k.layout * 10 + k.tubePasses;
+  const hit = slot.get(key);
   if (hit) return hit;
   const [ax, ay, bx, by] = basis(k.layout, k.tubePitch_m);
   let best = layOut(k, 0, 0);
@@ -139,7 +151,7 @@ export function tubeLayout(k: TubeLayoutKey): TubeLayout {
     tubeCount: Math.max(0, best.x.length - ties),
     outerTubeLimit_m: otl,
   };
-  cache.set(key, result);
+  slot.set(key, result);
   return result;
 }
 
