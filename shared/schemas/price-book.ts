@@ -74,3 +74,10 @@ export const priceSchema = z.object({
   priceBookVersion: z.int(),
 });
 export type Price = z.infer<typeof priceSchema>;
+
+/** `PUT /api/admin/price-book` (admin): saves `priceBook` as the next version; `note` says what changed. */
+export const savePriceBookSchema = z.object({
+  priceBook: priceBookSchema,
+  note: z.string().trim().min(1).max(500).optional(),
+});
+export type SavePriceBook = z.infer<typeof savePriceBookSchema>;
