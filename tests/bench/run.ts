@@ -1,0 +1,7 @@
+/** `npm run bench`: speed figures, printed, never asserted. Needs the local database for the HTTP part. */
+import { run as http } from './http';
+import { run as thermal } from './thermal';
+
+console.log(`Bundlesmith benchmarks on ${(await import('node:os')).cpus().length} cores, Node ${process.version}\n`);
+thermal();
+await http();
