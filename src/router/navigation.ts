@@ -7,13 +7,15 @@ export interface NavItem {
 }
 
 /** The main navigation for a role, read from the route table so a page and its menu entry agree. */
-export function navItemsFor(role: Role): NavItem[] {
+/** Menu entries for a role; an anonymous visitor (no role) sees only the public pages. */
+export function navItemsFor(role: Role | undefined): NavItem[] {
   const items: Array<NavItem & { order: number }> = [];
   for (const parent of routes) {
     for (const route of parent.children ?? []) {
       const nav = route.meta?.nav;
       if (!nav || typeof route.name !== 'string') continue;
-      if (route.meta?.roles && !route.meta.roles.includes(role)) continue;
+      if (role === undefined && !route.meta?.public) continue;
+      if (role !== undefined && route.meta?.roles && !route.meta.roles.includes(role)) continue;
       items.push({ name: route.name, label: nav.label, order: nav.order });
     }
   }

@@ -90,3 +90,14 @@ test('at phone width the panels stack and the result still shows', async (ctx) =
   const width = await page.evaluate(() => document.documentElement.scrollWidth);
   expect(width).toBeLessThanOrEqual(390);
 });
+
+test('the sign-in page leads to the sizing page, whose header offers sign-in, not sign-out', async (ctx) => {
+  const page = await openPage(browser(), ctx, desktop);
+  await visit(page, '/sign-in');
+  await page.locator(sel('link-sizing')).click();
+  await page.locator(sel('sizing-form')).waitFor();
+  expect(pathOf(page)).toBe('/size');
+  expect(await page.locator(sel('sign-out')).count()).toBe(0);
+  await page.locator(sel('header-sign-in')).click();
+  await page.locator(sel('sign-in-form')).waitFor();
+});
