@@ -4,6 +4,7 @@ import { hashPassword } from '../server/lib/auth/passwords';
 import { loadConfig } from '../server/lib/config';
 import { createDatabase } from './index';
 import { organizations, users } from './schema';
+import { seedPriceBook } from './seed-price-book';
 import { DEMO_PASSWORD, demoOrganizations, demoUsers } from './seed-data';
 
 const { DATABASE_URL } = loadConfig();
@@ -20,8 +21,9 @@ try {
     await db.insert(users).values({ email: u.email, name: u.name, role: u.role, organizationId, passwordHash }).onConflictDoNothing();
     added++;
   }
+  const bookVersion = await seedPriceBook(db);
   const [fab] = await db.select().from(organizations).where(eq(organizations.kind, 'fabricator'));
-  console.log(`[seed] demo data ready (${added} users added; fabricator ${fab?.name})`);
+  console.log(`[seed] demo data ready (${added} users added${bookVersion ? `, price book v${bookVersion}` : ''}; fabricator ${fab?.name})`);
 } finally {
   await pool.end();
 }

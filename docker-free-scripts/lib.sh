@@ -174,6 +174,11 @@ ensure_chromium() {
   if [ ! -x /usr/bin/chromium ]; then apt_install chromium; fi
 }
 
+# Test tools from Debian: pdftotext (poppler-utils) reads the offer PDFs back in the tests.
+ensure_test_tools() {
+  if ! command -v pdftotext >/dev/null 2>&1; then apt_install poppler-utils; fi
+}
+
 setup_database() {
   ensure_postgres_installed
   ensure_cluster

@@ -19,6 +19,7 @@ trap cleanup EXIT
 
 ensure_node_modules
 ensure_chromium
+ensure_test_tools
 ensure_postgres_installed
 ensure_cluster
 start_cluster

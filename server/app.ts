@@ -1,4 +1,5 @@
 import { existsSync } from 'node:fs';
+import { join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import express from 'express';
 import helmet from 'helmet';
@@ -8,6 +9,7 @@ import type { Config } from './lib/config';
 import { csrfGuard } from './lib/csrf';
 import { errorHandler, notFoundHandler } from './lib/errors';
 import type { Mailer } from './lib/mail';
+import { localStorage, type FileStorage } from './lib/storage';
 import { sessionMiddleware } from './lib/session';
 import { authRouter } from './features/auth/routes';
 import { verifyCredentials } from './features/auth/service';
@@ -15,6 +17,8 @@ import { fluidsRouter } from './features/fluids/routes';
 import { healthRouter } from './features/health/routes';
 import { adminRouter, organizationsRouter } from './features/organizations/routes';
 import { outboxRouter } from './features/outbox/routes';
+import { priceBookRouter } from './features/pricing/routes';
+import { quotesRouter } from './features/quotes/routes';
 import { thermalRouter } from './features/thermal/routes';
 
 export interface AppDeps {
@@ -23,12 +27,14 @@ export interface AppDeps {
   mailer: Mailer;
   /** folder of the built client (vite build); served with an SPA fallback when present */
   clientDir?: string;
+  /** uploaded files; a folder under DATA_DIR by default */
+  storage?: FileStorage;
 }
 
 const defaultClientDir = fileURLToPath(new URL('../dist', import.meta.url));
 
 /** Assembles the app in a visible order: headers → body → session → auth → routers → 404 → errors. */
-export function createApp({ config, database, mailer, clientDir = defaultClientDir }: AppDeps) {
+export function createApp({ config, database, mailer, clientDir = defaultClientDir, storage = localStorage(join(resolve(config.DATA_DIR), 'uploads')) }: AppDeps) {
   const { db, pool } = database;
   const deps = { db, mailer, config };
   const passport = createPassport(db, (email, password) => verifyCredentials(deps, email, password));
@@ -60,6 +66,8 @@ export function createApp({ config, database, mailer, clientDir = defaultClientD
   app.use('/api/fluids', fluidsRouter());
   app.use('/api/thermal', thermalRouter(pool));
   app.use('/api/organizations', organizationsRouter(deps));
+  app.use('/api/quotes', quotesRouter({ ...deps, storage }));
+  app.use('/api/admin/price-book', priceBookRouter(deps));
   app.use('/api/admin', adminRouter(deps));
   app.use('/api/dev', outboxRouter(config.OUTBOX_URL));
   app.use('/api', notFoundHandler);

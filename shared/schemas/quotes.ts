@@ -48,16 +48,23 @@ export const priceOverrideSchema = z.object({
   reason: z.string().trim().min(3, { error: 'Say why the computed price is overridden.' }).max(500),
 });
 
-export const patchQuoteSchema = z
-  .object({
+/** What a sales engineer may change; the same shape previews a change without saving it. */
+export const quoteChangeSchema = z.object({
+  duty: sizeRequestSchema.optional(),
+  design: designEditSchema.optional(),
+  priceOverrides: z.array(priceOverrideSchema).max(50).optional(),
+  quantity: z.int().min(1).max(500).optional(),
+});
+const notBoth = (p: { duty?: unknown; design?: unknown }) => !(p.duty && p.design);
+const notBothMessage = { error: 'Change the duty or the design, not both at once.', path: ['design'] };
+export const previewChangeSchema = quoteChangeSchema.refine(notBoth, notBothMessage);
+
+export const patchQuoteSchema = quoteChangeSchema
+  .extend({
     version: z.int().min(1),
-    duty: sizeRequestSchema.optional(),
-    design: designEditSchema.optional(),
-    priceOverrides: z.array(priceOverrideSchema).max(50).optional(),
-    quantity: z.int().min(1).max(500).optional(),
     internalNote: z.string().trim().min(1).max(4000).optional(),
   })
-  .refine((p) => !(p.duty && p.design), { error: 'Change the duty or the design, not both at once.', path: ['design'] });
+  .refine(notBoth, notBothMessage);
 export type PatchQuoteInput = z.input<typeof patchQuoteSchema>;
 
 export const approveQuoteSchema = z.object({ version: z.int().min(1), message: z.string().trim().max(4000).optional() });

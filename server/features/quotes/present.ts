@@ -1,0 +1,129 @@
+/** Rows → the response shapes of shared/schemas/quotes.ts, with what each role may see. */
+import type { SessionUser } from '../../../shared/schemas/auth';
+import type { PriceLine } from '../../../shared/schemas/price-book';
+import type { QuoteDetail, QuoteSummary, Revision } from '../../../shared/schemas/quotes';
+import { isStaff } from '../../lib/auth/guards';
+import type * as repo from './repository';
+
+/** Hours the fabricator promises for a first engineering response (shown against each quote's age). */
+export const RESPONSE_TARGET_HOURS = 48;
+/** ± spread of a budget offer before engineering review (a commercial choice of the demo fabricator). */
+export const BUDGET_SPREAD = 0.1;
+
+type Row = NonNullable<Awaited<ReturnType<typeof repo.findQuote>>>;
+const iso = (d: Date | string | null) => (d === null ? null : new Date(d).toISOString());
+
+export function toSummary(row: Row): QuoteSummary {
+  const created = new Date(row.createdAt);
+  const expired = row.status === 'approved' && row.validUntil !== null && new Date(row.validUntil) < new Date();
+  return {
+    id: row.id,
+    number: row.number,
+    status: row.status,
+    version: row.version,
+    organizationId: row.organizationId,
+    organizationName: row.organizationName,
+    reference: row.reference,
+    quantity: row.quantity,
+    needBy: row.needBy,
+    validUntil: iso(row.validUntil),
+    expired,
+    priceTotal_minor: row.priceTotal_minor,
+    currency: row.currency,
+    submittedBy: { id: row.submittedById, name: row.submittedByName },
+    assignee: row.assigneeId ? { id: row.assigneeId, name: row.assigneeName! } : null,
+    createdAt: created.toISOString(),
+    updatedAt: new Date(row.updatedAt).toISOString(),
+    responseDueAt: new Date(created.getTime() + RESPONSE_TARGET_HOURS * 3_600_000).toISOString(),
+    designSummary: row.designSummary,
+  };
+}
+
+/**
+ * Customers see the price as the fabricator chooses to show it: the cooler per unit, then any
+ * discount or surcharge. Cost build-up, overhead, margin and override reasons stay internal.
+ */
+export function customerPrice(price: Revision['price']): Revision['price'] {
+  const hidden = price.lines.filter((l) => l.group !== 'discount' && l.group !== 'surcharge');
+  const perUnit = hidden.reduce((s, l) => s + l.amount_minor, 0);
+  const unitLine: PriceLine = {
+    key: 'cooler',
+    group: 'material',
+    description: 'Cooler as specified (material, fabrication, testing)',
+    quantity: price.quantity,
+    unit: 'unit',
+    rate_minor: perUnit,
+    amount_minor: perUnit * price.quantity,
+    source: `price book v${price.priceBookVersion}`,
+  };
+  const visible = price.lines.filter((l) => l.group === 'discount' || l.group === 'surcharge').map(({ override: _o, ...l }) => l);
+  return { ...price, lines: [unitLine, ...visible] };
+}
+
+export function toDetail(
+  viewer: SessionUser,
+  row: Row,
+  revision: Revision,
+  parts: {
+    revisions: Awaited<ReturnType<typeof repo.listRevisions>>;
+    attachments: Awaited<ReturnType<typeof repo.listAttachments>>;
+    events: Awaited<ReturnType<typeof repo.listEvents>>;
+  },
+): QuoteDetail {
+  const staff = isStaff(viewer);
+  const summary = toSummary(row);
+  const sales = viewer.role === 'sales' || viewer.role === 'admin';
+  const open = row.status === 'in-review' || row.status === 'questions';
+  const shown = staff ? revision : { ...revision, price: customerPrice(revision.price) };
+  return {
+    ...summary,
+    notes: row.notes,
+    revision: shown,
+    revisions: parts.revisions
+      .filter((r) => staff || r.kind !== 'draft')
+      .map((r) => ({ ...r, createdAt: new Date(r.createdAt).toISOString() })),
+    budgetRange:
+      row.status === 'in-review' && revision.kind !== 'offer'
+        ? {
+            low_minor: Math.round(row.priceTotal_minor * (1 - BUDGET_SPREAD)),
+            high_minor: Math.round(row.priceTotal_minor * (1 + BUDGET_SPREAD)),
+          }
+        : null,
+    attachments: parts.attachments.map(({ storageKey: _k, ...a }) => ({ ...a, createdAt: new Date(a.createdAt).toISOString() })),
+    events: parts.events.map((e) => ({
+      id: e.id,
+      kind: e.kind,
+      message: e.message,
+      internal: e.internal,
+      actor: e.actorName ? { name: e.actorName, role: e.actorRole! } : null,
+      createdAt: new Date(e.createdAt).toISOString(),
+    })),
+    can: {
+      edit: sales && open,
+      approve: sales && open,
+      decline: sales && (open || row.status === 'approved'),
+      requestChange: viewer.role === 'customer' && ['in-review', 'questions', 'approved'].includes(row.status),
+      accept: viewer.role === 'customer' && row.status === 'approved' && !summary.expired,
+    },
+  };
+}
+
+/** `212 × 3/4 in BWG 16 copper, 2.4 m, 2 passes, NPS 12 STD` */
+export function designSummary(d: Revision['design']): string {
+  const od = d.tubeOuterDiameter_m / 0.0254;
+  const odLabel = Math.abs(od * 8 - Math.round(od * 8)) < 0.01 ? `${fraction(od)} in` : `${Math.round(d.tubeOuterDiameter_m * 1000)} mm`;
+  const passes = `${d.tubePasses} pass${d.tubePasses > 1 ? 'es' : ''}`;
+  return `${d.tubeCount} × ${odLabel} ${d.tubeWallLabel} ${d.tubeMaterial}, ${d.tubeLength_m.toFixed(2)} m, ${passes}${d.shellLabel ? `, ${d.shellLabel}` : ''}`;
+}
+
+function fraction(inches: number): string {
+  const eighths = Math.round(inches * 8);
+  const whole = Math.floor(eighths / 8);
+  let num = eighths % 8;
+  let den = 8;
+  while (num && num % 2 === 0) {
+    num /= 2;
+    den /= 2;
+  }
+  return [whole ? String(whole) : '', num ? `${num}/${den}` : ''].filter(Boolean).join(' ') || '0';
+}

@@ -1,0 +1,89 @@
+/** Review decisions: assign, approve (an offer), send back with questions, decline; the customer's change request. */
+import type { SessionUser } from '../../../shared/schemas/auth';
+import type { QuoteStatus } from '../../../shared/schemas/quotes';
+import { conflict, HttpError } from '../../lib/errors';
+import type { QuoteDeps } from './deps';
+import { money, notifyCustomer, notifySales } from './notify';
+import { activeBook } from './pricing-port';
+import * as repo from './repository';
+import { getQuote, loadVisible } from './service';
+
+const OPEN: QuoteStatus[] = ['in-review', 'questions'];
+
+function requireStatus(status: QuoteStatus, allowed: QuoteStatus[], action: string) {
+  if (!allowed.includes(status)) {
+    throw new HttpError(409, 'wrong-status', `A quote that is ${status} cannot be ${action}; it must be ${allowed.join(' or ')}.`);
+  }
+}
+
+const stale = () => conflict('Someone changed this quote since you opened it; reload it, check their change, then try again.', 'stale-version');
+
+export async function assign(deps: QuoteDeps, user: SessionUser, id: string, version: number) {
+  await loadVisible(deps, user, id);
+  if (!(await repo.updateQuoteAtVersion(deps.db, id, version, { assigneeId: user.id }))) throw stale();
+  await repo.insertEvent(deps.db, { quoteId: id, actorId: user.id, kind: 'assigned', message: `${user.name} took this quote`, internal: true });
+  return getQuote(deps, user, id);
+}
+
+/** Freezes the current design and price as an offer revision, valid for the book's validity days. */
+export async function approve(deps: QuoteDeps, user: SessionUser, id: string, input: { version: number; message?: string }) {
+  const row = await loadVisible(deps, user, id);
+  requireStatus(row.status, OPEN, 'approved');
+  const current = await repo.findRevision(deps.db, id, row.currentRevision);
+  const book = await activeBook(deps);
+  const validUntil = new Date(Date.now() + book.data.offerValidityDays * 86_400_000);
+  const number = row.currentRevision + 1;
+  await deps.db.transaction(async (tx) => {
+    const data = { ...current!.data, number, kind: 'offer' as const, createdAt: new Date().toISOString(), createdBy: user.name, validUntil: validUntil.toISOString() };
+    const ok = await repo.updateQuoteAtVersion(tx, id, input.version, {
+      status: 'approved',
+      currentRevision: number,
+      validUntil,
+      assigneeId: row.assigneeId ?? user.id,
+      priceTotalMinor: data.price.total_minor,
+    });
+    if (!ok) throw stale();
+    await repo.insertRevision(tx, { quoteId: id, number, kind: 'offer', data, priceBookVersion: current!.priceBookVersion, totalMinor: data.price.total_minor, createdBy: user.id });
+    await repo.insertEvent(tx, { quoteId: id, actorId: user.id, kind: 'approved', message: input.message ?? null, data: { revision: number } });
+  });
+  const detail = await getQuote(deps, user, id);
+  await notifyCustomer(
+    deps,
+    id,
+    `Your offer ${detail.number} is ready`,
+    `Our engineers reviewed your request and approved offer ${detail.number}, revision ${number}: ` +
+      `${detail.designSummary}, ${money(detail.priceTotal_minor, detail.currency)} for ${detail.quantity} unit(s), ` +
+      `valid until ${validUntil.toUTCString().slice(0, 16)}.` +
+      (input.message ? `\n\n${input.message}` : '') +
+      `\n\nRead it, download the PDF and accept it here:`,
+  );
+  return detail;
+}
+
+export async function sendBack(deps: QuoteDeps, user: SessionUser, id: string, input: { version?: number; message: string }) {
+  const row = await loadVisible(deps, user, id);
+  requireStatus(row.status, OPEN, 'sent back with questions');
+  if (!(await repo.updateQuoteAtVersion(deps.db, id, input.version ?? row.version, { status: 'questions', assigneeId: row.assigneeId ?? user.id }))) throw stale();
+  await repo.insertEvent(deps.db, { quoteId: id, actorId: user.id, kind: 'questions', message: input.message });
+  await notifyCustomer(deps, id, `Questions about your request ${row.number}`, `${user.name} has questions before we can make an offer:\n\n${input.message}\n\nAnswer with "Request a change" on the quote:`);
+  return getQuote(deps, user, id);
+}
+
+export async function decline(deps: QuoteDeps, user: SessionUser, id: string, input: { version?: number; message: string }) {
+  const row = await loadVisible(deps, user, id);
+  requireStatus(row.status, [...OPEN, 'approved'], 'declined');
+  if (!(await repo.updateQuoteAtVersion(deps.db, id, input.version ?? row.version, { status: 'declined' }))) throw stale();
+  await repo.insertEvent(deps.db, { quoteId: id, actorId: user.id, kind: 'declined', message: input.message });
+  await notifyCustomer(deps, id, `We cannot offer ${row.number}`, `We are sorry: we cannot make an offer for request ${row.number}.\n\n${input.message}`);
+  return getQuote(deps, user, id);
+}
+
+/** The customer's message; it reopens engineering review. */
+export async function requestChange(deps: QuoteDeps, user: SessionUser, id: string, input: { version?: number; message: string }) {
+  const row = await loadVisible(deps, user, id);
+  requireStatus(row.status, ['in-review', 'questions', 'approved'], 'changed');
+  if (!(await repo.updateQuoteAtVersion(deps.db, id, input.version ?? row.version, { status: 'in-review' }))) throw stale();
+  await repo.insertEvent(deps.db, { quoteId: id, actorId: user.id, kind: 'change-requested', message: input.message });
+  await notifySales(deps, id, row.assigneeEmail ?? undefined, `${row.organizationName} asks for a change to ${row.number}`, `${user.name} wrote:\n\n${input.message}`);
+  return getQuote(deps, user, id);
+}
