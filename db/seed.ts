@@ -5,10 +5,11 @@ import { loadConfig } from '../server/lib/config';
 import { createDatabase } from './index';
 import { organizations, users } from './schema';
 import { seedPriceBook } from './seed-price-book';
+import { seedQuotes } from './seed-quotes';
 import { DEMO_PASSWORD, demoOrganizations, demoUsers } from './seed-data';
 
 const { DATABASE_URL } = loadConfig();
-const { db, pool } = createDatabase(DATABASE_URL, 1);
+const { db, pool } = createDatabase(DATABASE_URL, 2);
 try {
   await db.insert(organizations).values([...demoOrganizations]).onConflictDoNothing({ target: organizations.name });
   const orgIds = new Map((await db.select().from(organizations)).map((o) => [o.name, o.id]));
@@ -22,8 +23,9 @@ try {
     added++;
   }
   const bookVersion = await seedPriceBook(db);
+  const quotesAdded = await seedQuotes(db);
   const [fab] = await db.select().from(organizations).where(eq(organizations.kind, 'fabricator'));
-  console.log(`[seed] demo data ready (${added} users added${bookVersion ? `, price book v${bookVersion}` : ''}; fabricator ${fab?.name})`);
+  console.log(`[seed] demo data ready (${added} users, ${quotesAdded} quotes added${bookVersion ? `, price book v${bookVersion}` : ''}; fabricator ${fab?.name})`);
 } finally {
   await pool.end();
 }
