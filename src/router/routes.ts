@@ -51,6 +51,24 @@ export const routes: RouteRecordRaw[] = [
         meta: { public: true, title: 'Size a cooler', nav: { label: 'Size a cooler', order: 10 } },
       },
       {
+        path: 'review',
+        name: 'review-queue',
+        component: () => import('../views/review/queue/index.vue'),
+        meta: { title: 'Review queue', roles: ['sales', 'admin'], nav: { label: 'Review queue', order: 30 } },
+      },
+      {
+        path: 'review/:id',
+        name: 'quote-workspace',
+        component: () => import('../views/review/workspace/index.vue'),
+        meta: { title: 'Quote review', roles: ['sales', 'admin'] },
+      },
+      {
+        path: 'admin/price-book',
+        name: 'admin-price-book',
+        component: () => import('../views/admin/price-book/index.vue'),
+        meta: { title: 'Price book', roles: ['admin'], nav: { label: 'Price book', order: 85 } },
+      },
+      {
         path: 'admin/invitations',
         name: 'admin-invitations',
         component: () => import('../views/admin/invitations/index.vue'),

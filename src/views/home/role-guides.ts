@@ -46,21 +46,23 @@ export const roleGuides: Record<Role, RoleGuide> = {
     summary:
       'Customers’ requests arrive already sized and priced from the price book. You check the engineering, ' +
       'adjust where judgement is needed, and send the offer under the company’s name.',
-    now: [],
-    coming: [
+    now: [
       {
         title: 'Review queue',
-        text: 'Every new request with its auto-sized design, oldest first, with the checks that need a human eye.',
+        text: 'Every request with its auto-sized design and price, how long it has waited against the response target, and who has it.',
+        route: 'review-queue',
       },
       {
-        title: 'Correct and revise',
+        title: 'Correct, revise and approve',
         text:
-          'Change the duty or the geometry, set fouling allowances, margins and materials; each change makes a new ' +
-          'revision that keeps the old one intact.',
+          'Open a quote from the queue: change the duty or the geometry and see it re-rated at once, override price lines ' +
+          'with a stated reason, keep internal notes, then approve and send the offer, ask questions or decline.',
       },
+    ],
+    coming: [
       {
-        title: 'Approve offers',
-        text: 'Adjust price lines with a stated reason, approve and send; revise when the customer changes the duty.',
+        title: 'Revise on request',
+        text: 'Pick up a customer’s change request and send a revised offer that keeps the old one intact.',
       },
     ],
   },
@@ -97,12 +99,18 @@ export const roleGuides: Record<Role, RoleGuide> = {
         text: 'Read every e-mail the application has sent — invitations, password resets — as caught by the local mail sink.',
         route: 'admin-outbox',
       },
-    ],
-    coming: [
       {
         title: 'Price book',
-        text: 'Material, tube, labour and overhead rates and margins that feed every automatic quote.',
+        text: 'Material, tube, labour and overhead rates, margins, deposit and lead time that feed every automatic quote; each save is a new version.',
+        route: 'admin-price-book',
       },
+      {
+        title: 'Review queue',
+        text: 'Every customer request and where it stands; you can review and approve like a sales engineer.',
+        route: 'review-queue',
+      },
+    ],
+    coming: [
       {
         title: 'Materials and fluids',
         text: 'The tube and shell materials and the fluid library the sizing draws on, each with its source.',
