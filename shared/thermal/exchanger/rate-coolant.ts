@@ -12,7 +12,7 @@ import { effectiveness, lmtdCorrectionFactor } from './effectiveness';
 import { overallCoefficientOutside } from './overall';
 import { coolantProfile } from './profile';
 import { effectiveCp, type RateOptions } from './rate-wall';
-import { memoProperties, solveFixedPoint } from './solve';
+import { solveFixedPoint } from './solve';
 import { shellPressureDropKern, shellSideKern, shellWarnings, type ShellGeometry } from './shell-side';
 import { propertiesOrNull, type Stream } from './streams';
 import { entranceLength, tubePressureDrop, tubeSideConvection, tubeSideH, tubeVelocity, type Bundle } from './tube-side';
@@ -37,8 +37,8 @@ export function rateCoolant(
   const tHin = s.inletTemp_C;
   const tCin = c.inletTemp_C;
   const areaOut = b.count * Math.PI * b.dOuter * b.length;
-  const hotProps = memoProperties(s.properties);
-  const coldProps = memoProperties(c.properties);
+  const hotProps = s.properties;
+  const coldProps = c.properties;
   // state carried between evaluations: capacity ratio and wall temperatures lag one evaluation
   let ratio = (s.massFlow_kg_s * hotProps(tHin).specificHeat) / (c.massFlow_kg_s * coldProps(tCin).specificHeat);
   let tWi = 0.5 * (tHin + tCin);

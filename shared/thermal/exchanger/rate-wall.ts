@@ -3,7 +3,7 @@ import type { RateResult } from '../../schemas/thermal';
 import type { CorrelationChoice } from '../correlations/select';
 import type { FluidProperties } from '../fluids';
 import { ENGINEERING_CAUTION, tubeWarnings } from './checks';
-import { solveFixedPoint, memoProperties } from './solve';
+import { solveFixedPoint } from './solve';
 import { condensation, propertiesOrNull, type Stream } from './streams';
 import { entranceLength, tubePressureDrop, tubeSideConvection, tubeSideH, tubeVelocity, type Bundle } from './tube-side';
 import { ntuWall, outletTempWall } from './wall';
@@ -27,7 +27,7 @@ export function rateWall(s: Stream, wallTemp_C: number, b: Bundle, choice: Corre
   const wall = propertiesOrNull(s, wallTemp_C);
   const path = b.passes * b.length;
   const mTube = (s.massFlow_kg_s * b.passes) / b.count;
-  const props = memoProperties(s.properties);
+  const props = s.properties;
   const next = (tOut: number): number => {
     const tMean = 0.5 * (tIn + tOut);
     const bulk = props(tMean);

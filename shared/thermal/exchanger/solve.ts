@@ -24,20 +24,25 @@ export function solveFixedPoint(g: (x: number) => number, x0: number, lo: number
   return x;
 }
 
-/** Remembers the last two property evaluations (the loops ask for the same states repeatedly). */
+/** 8: states a coolant rating revisits (inlet, wall and bulk temperatures of the last few passes). */
+const MEMO_SIZE = 8;
+
+/**
+ * Remembers the last `MEMO_SIZE` property evaluations by exact temperature. A stream wraps its
+ * property function in one, so the inlet checks, the wall temperatures held between iterations
+ * and the final consistent pass reuse what the fixed point already computed; the values are the
+ * same objects, so results do not change. Failures are not remembered (they throw every time).
+ */
 export function memoProperties(f: (temp_C: number) => FluidProperties): (temp_C: number) => FluidProperties {
-  let t1 = NaN;
-  let p1: FluidProperties | undefined;
-  let t2 = NaN;
-  let p2: FluidProperties | undefined;
+  const temps = new Float64Array(MEMO_SIZE).fill(NaN);
+  const values: (FluidProperties | undefined)[] = new Array<FluidProperties | undefined>(MEMO_SIZE).fill(undefined);
+  let next = 0;
   return (t) => {
-    if (t === t1) return p1!;
-    if (t === t2) return p2!;
+    for (let k = 0; k < MEMO_SIZE; k++) if (temps[k] === t) return values[k]!;
     const p = f(t);
-    t2 = t1;
-    p2 = p1;
-    t1 = t;
-    p1 = p;
+    temps[next] = t;
+    values[next] = p;
+    next = (next + 1) % MEMO_SIZE;
     return p;
   };
 }

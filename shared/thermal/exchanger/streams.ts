@@ -15,6 +15,7 @@ import {
   type FluidProperties,
 } from '../fluids';
 import type { FluidRef } from '../../schemas/thermal';
+import { memoProperties } from './solve';
 
 export interface Stream {
   fluid: Fluid;
@@ -27,6 +28,7 @@ export interface Stream {
   aqueous: boolean;
   /** humidity ratio at the inlet, kg water / kg dry air (humid air only) */
   humidityRatio?: number;
+  /** remembers recent states (`memoProperties`): callers may ask again rather than carry results */
   properties: (temp_C: number) => FluidProperties;
 }
 
@@ -77,12 +79,12 @@ export function resolveStream(s: StreamInput, field: string): Stream {
     const w = humidityRatioFromIntake(s.intake);
     return {
       fluid, field, pressure_Pa: p, massFlow_kg_s: s.massFlow_kg_s, inletTemp_C: s.inletTemp_C, aqueous, humidityRatio: w,
-      properties: tagged(field, (t) => moistAirProperties(t, p, w)),
+      properties: memoProperties(tagged(field, (t) => moistAirProperties(t, p, w))),
     };
   }
   return {
     fluid, field, pressure_Pa: p, massFlow_kg_s: s.massFlow_kg_s, inletTemp_C: s.inletTemp_C, aqueous,
-    properties: tagged(field, (t) => fluid.properties(t, p)),
+    properties: memoProperties(tagged(field, (t) => fluid.properties(t, p))),
   };
 }
 
