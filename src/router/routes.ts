@@ -1,5 +1,6 @@
 import type { RouteRecordRaw } from 'vue-router';
 import type { Role } from '@shared/schemas/auth';
+import { staffToWorkspace } from '../views/quotes/staff-redirect';
 
 declare module 'vue-router' {
   interface RouteMeta {
@@ -49,6 +50,26 @@ export const routes: RouteRecordRaw[] = [
         name: 'sizing',
         component: () => import('../views/sizing/index.vue'),
         meta: { public: true, title: 'Size a cooler', nav: { label: 'Size a cooler', order: 10 } },
+      },
+      // The customer's quotes. `/quotes/:id` is also where e-mails link; staff are sent to their workspace.
+      {
+        path: 'quotes/new',
+        name: 'quote-new',
+        component: () => import('../views/quotes/new/index.vue'),
+        meta: { title: 'New request', roles: ['customer'], nav: { label: 'New request', order: 20 } },
+      },
+      {
+        path: 'quotes',
+        name: 'quotes',
+        component: () => import('../views/quotes/list/index.vue'),
+        meta: { title: 'My quotes', roles: ['customer'], nav: { label: 'My quotes', order: 25 } },
+      },
+      {
+        path: 'quotes/:id',
+        name: 'quote',
+        component: () => import('../views/quotes/detail/index.vue'),
+        beforeEnter: staffToWorkspace,
+        meta: { title: 'Quote' },
       },
       {
         path: 'review',

@@ -21,23 +21,31 @@ export const roleGuides: Record<Role, RoleGuide> = {
     summary:
       'You state what has to be cooled; the fabricator sizes the bundle, prices it and stands behind the offer. ' +
       'Quotes and orders of your organisation are visible to your colleagues there and to the fabricator only.',
-    now: [],
-    coming: [
+    now: [
       {
-        title: 'Request a sized cooler',
+        title: 'New request',
         text:
           'Describe the duty — hot fluid (compressed air, hydraulic or lube oil, glycol, process liquid), flow, ' +
-          'inlet and target outlet temperature, and the coolant you have — and get a sized, priced design in minutes.',
+          'inlet and target outlet temperature, and the coolant you have — attach your datasheet or drawing, and ' +
+          'get a sized, priced budget offer at once.',
+        route: 'quote-new',
       },
       {
-        title: 'Compare and attach',
-        text: 'Compare design options side by side and attach your own datasheet or drawing to a request.',
-      },
-      {
-        title: 'Track quotes and orders',
+        title: 'My quotes',
         text:
-          'Follow each offer through the engineers’ review, accept it with your PO number, pay the deposit and ' +
-          'watch the order move through the shop.',
+          'Follow each request through the engineers’ review, answer their questions, ask for changes and ' +
+          'download approved offers as PDF.',
+        route: 'quotes',
+      },
+    ],
+    coming: [
+      {
+        title: 'Compare options',
+        text: 'Compare the design options of a request side by side.',
+      },
+      {
+        title: 'Accept and track orders',
+        text: 'Accept an offer with your PO number, pay the deposit and watch the order move through the shop.',
       },
     ],
   },

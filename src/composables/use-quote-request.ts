@@ -1,0 +1,85 @@
+/**
+ * A customer's new request: the sizing page's duty form plus quantity, need-by date, reference and
+ * site notes (checked by the same `createQuoteSchema` the server uses), then the files to attach.
+ * On submit the server sizes and prices at once; 400 field errors land under their fields (the duty's
+ * keyed `duty.process.…` by the server, `process.…` by the duty form), a 422 becomes the one
+ * explanation of why the duty cannot be met. Files go up right after the quote exists.
+ */
+import { reactive, ref } from 'vue';
+import { createQuoteSchema, type QuoteDetail } from '@shared/schemas/quotes';
+import { ApiError, errorMessage, isApiError, type FieldErrors } from '../api/http';
+import { createQuote } from '../api/quotes';
+import { useQuoteUploads } from './use-quote-uploads';
+import { useSizingForm } from './use-sizing-form';
+import type { Explanation } from './use-sizing-run';
+import { useZodForm } from './use-zod-form';
+
+const detailsSchema = createQuoteSchema.omit({ duty: true });
+const DUTY_PREFIX = 'duty.';
+const DUTY_ROOTS = ['process.', 'boundary.', 'constraints.', 'correlation'];
+
+/** Splits server field errors into the duty form's (without `duty.`) and the details'. */
+function splitFields(fields: FieldErrors): { duty: FieldErrors; details: FieldErrors } {
+  const duty: FieldErrors = {};
+  const details: FieldErrors = {};
+  for (const [key, message] of Object.entries(fields)) {
+    const path = key.startsWith(DUTY_PREFIX) ? key.slice(DUTY_PREFIX.length) : key;
+    if (key.startsWith(DUTY_PREFIX) || DUTY_ROOTS.some((root) => path.startsWith(root))) duty[path] = message;
+    else details[path] = message;
+  }
+  return { duty, details };
+}
+
+export function useQuoteRequest() {
+  const duty = useSizingForm();
+  const details = reactive({ quantity: 1 as number | null, needBy: null as string | null, reference: '', notes: '' });
+  const checks = useZodForm(detailsSchema, details);
+  const uploads = useQuoteUploads();
+  const busy = ref(false);
+  const failure = ref<string | null>(null);
+  const explanation = ref<Explanation | null>(null);
+  /** set once the server has stored the request: it must not be sent twice */
+  const created = ref<QuoteDetail | null>(null);
+
+  function applyError(error: ApiError): void {
+    const { duty: dutyFields, details: detailFields } = splitFields(error.fields);
+    if (error.status === 422) {
+      const field = Object.keys(dutyFields)[0];
+      explanation.value = { code: error.code, message: error.message, field };
+      if (field) duty.applyServerError(new ApiError(422, error.code, error.message, { [field]: 'This is what stops the design: see the explanation below.' }));
+      return;
+    }
+    duty.applyServerError(new ApiError(error.status, error.code, error.message, dutyFields));
+    checks.applyServerError(new ApiError(error.status, error.code, error.message, detailFields));
+    failure.value = error.status === 400 ? 'The server did not accept some fields: see the messages under them.' : error.message;
+  }
+
+  /** Sends the request, then the files; the stored quote, or null when nothing was stored. */
+  async function submit(): Promise<QuoteDetail | null> {
+    if (created.value) return created.value;
+    failure.value = null;
+    explanation.value = null;
+    const dutyInput = duty.validate();
+    const rest = checks.validate();
+    if (!dutyInput || !rest) {
+      failure.value = 'Some fields need attention: see the messages under them.';
+      return null;
+    }
+    busy.value = true;
+    try {
+      created.value = await createQuote({ ...rest, duty: dutyInput });
+    } catch (error) {
+      if (isApiError(error)) applyError(error);
+      else failure.value = errorMessage(error);
+      return null;
+    } finally {
+      busy.value = false;
+    }
+    await uploads.uploadAll(created.value.id);
+    return created.value;
+  }
+
+  return { duty, details, checks, uploads, busy, failure, explanation, created, submit };
+}
+
+export type QuoteRequest = ReturnType<typeof useQuoteRequest>;
