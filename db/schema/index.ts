@@ -4,3 +4,4 @@ export * from './auth-tokens';
 export * from './sessions';
 export * from './quotes';
 export * from './price-books';
+export * from './orders';
