@@ -133,3 +133,30 @@ test('a customer of another organisation opening that quote sees "not found", no
   expect(await page.locator(sel('quote-offer')).count()).toBe(0);
   expect(await page.locator(sel('quote-page')).textContent()).not.toContain(quote.number);
 });
+
+test('an impossible duty gets the explanation on the New request page, and nothing is sent', async (ctx) => {
+  const page = await openPage(browser(), ctx);
+  await signInAs(page, 'customer');
+  await visit(page, '/quotes/new');
+  await page.locator(sel('request-duty')).waitFor();
+  await setNumber(page, 'coolant-inlet', 27);
+  await setNumber(page, 'process-outlet', 20);
+  await page.locator(sel('preview-refused')).waitFor();
+  await page.locator(sel('send-request')).click();
+  const explanation = page.locator(sel('sizing-explanation'));
+  await explanation.waitFor();
+  expect(await explanation.textContent()).toMatch(/coolant/i);
+  expect(await explanation.textContent()).toMatch(/Nothing was sent/);
+  expect(await page.locator(`${sel('process-outlet-item')} .n-form-item-feedback`).textContent()).toMatch(/explanation/);
+  expect(pathOf(page)).toBe('/quotes/new');
+});
+
+test('a sales engineer following a quote link from an e-mail lands in their workspace', async (ctx) => {
+  const customer = await apiAs(demoUsers.customer.email);
+  const quote = await customer<Created>('POST', '/quotes', { duty, quantity: 1, reference: `E-mail link ${Date.now()}` });
+  const page = await openPage(browser(), ctx);
+  await signInAs(page, 'sales');
+  await visit(page, `/quotes/${quote.id}`);
+  await page.waitForURL(`**/review/${quote.id}`);
+  expect(pathOf(page)).toBe(`/review/${quote.id}`);
+});
