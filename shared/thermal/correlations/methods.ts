@@ -64,6 +64,32 @@ const prRange = (min: number, max: number): ValidityRange => ({ quantity: 'Pr', 
 const lOverD = (min: number): ValidityRange => ({ quantity: 'L/D', value: (i) => i.length / i.dInner, min, max: Infinity });
 const muRange: ValidityRange = { quantity: 'μ/μw', value: (i) => i.muRatio, min: 0.0044, max: 9.75 };
 
+// The transition interpolates the laminar and turbulent values at its two ends: the inputs there
+// are the same but for Re. Two scratch objects, refilled per call, save two allocations each time
+// an iteration asks (nothing keeps them: the methods return numbers).
+const laminarEnd = emptyInputs();
+const turbulentEnd = emptyInputs();
+
+function emptyInputs(): ConvectionInputs {
+  return { re: 0, pr: 0, dInner: 0, length: 0, muRatio: 0, prWall: 0, tBulk_K: 0, tWall_K: 0, heating: false, boundary: 'wall', phase: 'liquid' };
+}
+
+/** Copies every field of `ConvectionInputs` (a field added there must be added here) and sets Re. */
+function atRe(to: ConvectionInputs, i: ConvectionInputs, re: number): ConvectionInputs {
+  to.re = re;
+  to.pr = i.pr;
+  to.dInner = i.dInner;
+  to.length = i.length;
+  to.muRatio = i.muRatio;
+  to.prWall = i.prWall;
+  to.tBulk_K = i.tBulk_K;
+  to.tWall_K = i.tWall_K;
+  to.heating = i.heating;
+  to.boundary = i.boundary;
+  to.phase = i.phase;
+  return to;
+}
+
 /** Nusselt-number methods. Labels are stable: results and requests use them. */
 export const nusseltMethods = {
   'laminar-fully-developed': entry({
@@ -117,7 +143,7 @@ export const nusseltMethods = {
     label: 'gnielinski-transition',
     name: 'Transition interpolation 2300–10⁴ (Gnielinski 1995)',
     fn: nusseltTransitionGnielinski,
-    apply: (f, i) => f(i.re, autoLaminar({ ...i, re: RE_LAMINAR_LIMIT }), autoTurbulent({ ...i, re: RE_TURBULENT_LIMIT })),
+    apply: (f, i) => f(i.re, autoLaminar(atRe(laminarEnd, i, RE_LAMINAR_LIMIT)), autoTurbulent(atRe(turbulentEnd, i, RE_TURBULENT_LIMIT))),
     validity: [reRange(RE_LAMINAR_LIMIT, RE_TURBULENT_LIMIT)],
   }),
 } satisfies Record<string, MethodEntry>;

@@ -8,22 +8,19 @@ import type { RateResult } from '../../schemas/thermal';
 import type { CorrelationChoice } from '../correlations/select';
 import { ThermalInputError } from '../errors';
 import { ENGINEERING_CAUTION, tubeWarnings } from './checks';
-import { effectiveness, lmtdCorrectionFactor } from './effectiveness';
-import { overallCoefficientOutside } from './overall';
+import { coolantPass, coolantStep, type CoolantState, type Fouling } from './coolant-step';
+import { lmtdCorrectionFactor } from './effectiveness';
 import { coolantProfile } from './profile';
-import { effectiveCp, type RateOptions } from './rate-wall';
+import type { RateOptions } from './rate-wall';
 import { solveFixedPoint } from './solve';
-import { shellPressureDropKern, shellSideKern, shellWarnings, type ShellGeometry } from './shell-side';
-import { propertiesOrNull, type Stream } from './streams';
-import { entranceLength, tubePressureDrop, tubeSideConvection, tubeSideH, tubeVelocity, type Bundle } from './tube-side';
+import { shellPressureDropKern, shellWarnings, type ShellGeometry } from './shell-side';
+import type { Stream } from './streams';
+import { entranceLength, tubePressureDrop, tubeVelocity, type Bundle } from './tube-side';
 
 /** 0.75: below this F a single shell is refused; more shells in series are needed (common practice). */
 export const MIN_LMTD_CORRECTION = 0.75;
 
-export interface Fouling {
-  inside: number;
-  outside: number;
-}
+export type { Fouling };
 
 export function rateCoolant(
   s: Stream,
@@ -37,31 +34,15 @@ export function rateCoolant(
   const tHin = s.inletTemp_C;
   const tCin = c.inletTemp_C;
   const areaOut = b.count * Math.PI * b.dOuter * b.length;
-  const hotProps = s.properties;
-  const coldProps = c.properties;
-  // state carried between evaluations: capacity ratio and wall temperatures lag one evaluation
-  let ratio = (s.massFlow_kg_s * hotProps(tHin).specificHeat) / (c.massFlow_kg_s * coldProps(tCin).specificHeat);
-  let tWi = 0.5 * (tHin + tCin);
-  let tWo = tWi;
-  let tHout = 0;
-  let tCout = 0;
-  let st!: ReturnType<typeof step>;
-  const g = (x: number): number => {
-    tHout = x;
-    tCout = tCin + (tHin - x) * ratio;
-    st = step(false);
-    ratio = st.ch / st.cc;
-    // wall temperatures only steer μ/μw: moved when they change by more than 0.1 K, saving property calls
-    if (Math.abs(st.tWi - tWi) > 0.1) tWi = st.tWi;
-    if (Math.abs(st.tWo - tWo) > 0.1) tWo = st.tWo;
-    return st.tHout;
-  };
+  const tW0 = 0.5 * (tHin + tCin);
+  const ratio = (s.massFlow_kg_s * s.properties(tHin).specificHeat) / (c.massFlow_kg_s * c.properties(tCin).specificHeat);
+  const k: CoolantState = { s, c, b, shell, fouling, choice, tHin, tCin, areaOut, tHout: 0, tCout: 0, tWi: tW0, tWo: tW0, ratio };
   const span = tHin - tCin;
-  const x = solveFixedPoint(g, tHin - 0.5 * span, tCin, tHin, 1e-7 * (1 + span));
-  if (x !== tHout) g(x);
-  st = step(true);
-  tHout = st.tHout;
-  tCout = st.tCout;
+  const x = solveFixedPoint((x) => coolantPass(k, x), tHin - 0.5 * span, tCin, tHin, 1e-7 * (1 + span));
+  if (x !== k.tHout) coolantPass(k, x);
+  const st = coolantStep(k, true);
+  const tHout = st.tHout;
+  const tCout = st.tCout;
   const conv = st.conv!;
 
   const problem = c.fluid.stateProblem(tCout, c.pressure_Pa);
@@ -122,35 +103,4 @@ export function rateCoolant(
     result.latentDuty_W = st.latent;
   }
   return result;
-
-  /** One pass of the fixed point: properties at the current means → new outlets and wall temperatures. */
-  function step(withWarnings: boolean) {
-    const tHm = 0.5 * (tHin + tHout);
-    const tCm = 0.5 * (tCin + tCout);
-    const hot = hotProps(tHm);
-    const cold = coldProps(tCm);
-    const wallIn = propertiesOrNull(s, tWi) ?? hot;
-    const muWallShell = (propertiesOrNull(c, tWo) ?? cold).viscosity;
-    const conv = withWarnings ? tubeSideConvection(b, s.massFlow_kg_s, hot, wallIn, tHm, tWi, s.fluid.phase, choice, true) : null;
-    const hIn = conv ? conv.h : tubeSideH(b, s.massFlow_kg_s, hot, wallIn, tHm, tWi, s.fluid.phase, choice);
-    const shellSide = shellSideKern(shell, b.dOuter, c.massFlow_kg_s, cold, muWallShell);
-    const u = overallCoefficientOutside(hIn, shellSide.h, b.dInner, b.dOuter, b.kWall, fouling.inside, fouling.outside);
-    const cpH = effectiveCp(s, hot, tHout);
-    const ch = s.massFlow_kg_s * cpH.cp;
-    const cc = c.massFlow_kg_s * cold.specificHeat;
-    const cmin = Math.min(ch, cc);
-    const cr = cmin / Math.max(ch, cc);
-    const ntu = (u * areaOut) / cmin;
-    const eps = effectiveness(ntu, cr, b.passes);
-    const q = eps * cmin * (tHin - tCin);
-    const rTotal = 1 / u;
-    const rIn = b.dOuter / (b.dInner * hIn);
-    const dtMean = tHm - tCm;
-    return {
-      tHout: tHin - q / ch, tCout: tCin + q / cc,
-      tWi: tHm - (rIn / rTotal) * dtMean, tWo: tCm + (1 / shellSide.h / rTotal) * dtMean,
-      hot, cold, conv, shell: shellSide, muWallShell, u, ntu, eps, cr, q, ch, cc,
-      condensate: cpH.condensate_kg_s, latent: cpH.latent_W,
-    };
-  }
 }

@@ -28,14 +28,17 @@ export function rateWall(s: Stream, wallTemp_C: number, b: Bundle, choice: Corre
   const path = b.passes * b.length;
   const mTube = (s.massFlow_kg_s * b.passes) / b.count;
   const props = s.properties;
-  const next = (tOut: number): number => {
-    const tMean = 0.5 * (tIn + tOut);
-    const bulk = props(tMean);
-    const h = tubeSideH(b, s.massFlow_kg_s, bulk, wall ?? bulk, tMean, wallTemp_C, s.fluid.phase, choice);
-    return outletTempWall(tIn, wallTemp_C, ntuWall(b.dInner, path, h, mTube, effectiveCp(s, bulk, tOut).cp));
-  };
   const span = tIn - wallTemp_C;
-  const x = solveFixedPoint(next, wallTemp_C + 0.3 * span, wallTemp_C, tIn, 1e-7 * (1 + span));
+  // the map written in the call, not bound to a name: a named closure costs a name property per rating under tsx
+  const x = solveFixedPoint(
+    (tOut) => {
+      const tMean = 0.5 * (tIn + tOut);
+      const bulk = props(tMean);
+      const h = tubeSideH(b, s.massFlow_kg_s, bulk, wall ?? bulk, tMean, wallTemp_C, s.fluid.phase, choice);
+      return outletTempWall(tIn, wallTemp_C, ntuWall(b.dInner, path, h, mTube, effectiveCp(s, bulk, tOut).cp));
+    },
+    wallTemp_C + 0.3 * span, wallTemp_C, tIn, 1e-7 * (1 + span),
+  );
   const tMean = 0.5 * (tIn + x);
   const bulk = props(tMean);
   const conv = tubeSideConvection(b, s.massFlow_kg_s, bulk, wall ?? bulk, tMean, wallTemp_C, s.fluid.phase, choice, true);

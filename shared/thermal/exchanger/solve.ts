@@ -34,8 +34,9 @@ const MEMO_SIZE = 8;
  * same objects, so results do not change. Failures are not remembered (they throw every time).
  */
 export function memoProperties(f: (temp_C: number) => FluidProperties): (temp_C: number) => FluidProperties {
-  const temps = new Float64Array(MEMO_SIZE).fill(NaN);
-  const values: (FluidProperties | undefined)[] = new Array<FluidProperties | undefined>(MEMO_SIZE).fill(undefined);
+  // plain arrays: a typed array's buffer costs more to make than a rating saves with it
+  const temps = new Array<number>(MEMO_SIZE).fill(NaN);
+  const values = new Array<FluidProperties | undefined>(MEMO_SIZE).fill(undefined);
   let next = 0;
   return (t) => {
     for (let k = 0; k < MEMO_SIZE; k++) if (temps[k] === t) return values[k]!;

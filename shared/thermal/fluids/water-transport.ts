@@ -37,10 +37,16 @@ const LN = Float64Array.from([
   -3.18369245, 1.1168348, -0.19268305, 0.012913842,
 ]);
 
-const powT = new Float64Array(6); // (1/T̄ − 1)^i, refilled each call
+const powT = new Float64Array(6); // (1/T̄ − 1)^i
 const powD = new Float64Array(7); // (ρ̄ − 1)^j
+// the state the tables hold: viscosity and conductivity are asked at the same (T, ρ) in turn
+let filledTr = NaN;
+let filledDr = NaN;
 
 function fillPowers(tr: number, dr: number): void {
+  if (tr === filledTr && dr === filledDr) return;
+  filledTr = tr;
+  filledDr = dr;
   const x = 1 / tr - 1;
   const y = dr - 1;
   powT[0] = 1;

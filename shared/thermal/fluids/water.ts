@@ -27,6 +27,19 @@ const info: FluidInfo = {
     'thermal conductivity IAPWS R15-11 (2011), critical enhancement neglected',
 };
 
+// Every property call checks for boiling; a rating asks at one pressure many times, so the last
+// pressure's saturation temperature is kept (the same number, computed once).
+let lastSatP = NaN;
+let lastSatT_C = NaN;
+
+function saturationTemp_C(pressure_Pa: number): number {
+  if (pressure_Pa !== lastSatP) {
+    lastSatT_C = pressure_Pa > SAT_P_MIN_PA ? waterSaturationTemperature(pressure_Pa) - 273.15 : 0.01;
+    lastSatP = pressure_Pa;
+  }
+  return lastSatT_C;
+}
+
 function waterIssue(temp_C: number, pressure_Pa: number): StateIssue | null {
   if (Number.isFinite(temp_C) && temp_C <= 0) {
     return {
@@ -40,7 +53,7 @@ function waterIssue(temp_C: number, pressure_Pa: number): StateIssue | null {
     return { code: 'fluid-range', message: `Water: ${fmtBar(pressure_Pa)} is above the 1000 bar limit of IAPWS-IF97 region 1.` };
   }
   if (pressure_Pa < SAT_P_MAX_PA) {
-    const tSat_C = pressure_Pa > SAT_P_MIN_PA ? waterSaturationTemperature(pressure_Pa) - 273.15 : 0.01;
+    const tSat_C = saturationTemp_C(pressure_Pa);
     if (temp_C >= tSat_C) {
       const pNeeded = waterSaturationPressure(temp_C + 273.15);
       return {
