@@ -120,6 +120,14 @@ test('a customer finds an approved offer in My quotes and downloads its PDF', as
   // at phone width the page fits the screen
   await page.setViewportSize(phone);
   expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(phone.width);
+
+  // asking for a change reopens the review; the approved offer stays on the page meanwhile
+  await page.locator(sel('change-message')).fill('Please quote 90/10 copper-nickel tubes as well.');
+  await page.locator(sel('change-send')).click();
+  await page.locator(sel('change-sent')).waitFor();
+  expect(await page.locator(sel('quote-status')).getAttribute('data-status')).toBe('in-review');
+  expect(await page.locator(sel('quote-event')).last().getAttribute('data-kind')).toBe('change-requested');
+  expect(await page.locator(sel('quote-event-message')).last().textContent()).toContain('90/10 copper-nickel');
 });
 
 test('a customer of another organisation opening that quote sees "not found", not the quote', async (ctx) => {
@@ -159,4 +167,32 @@ test('a sales engineer following a quote link from an e-mail lands in their work
   await visit(page, `/quotes/${quote.id}`);
   await page.waitForURL(`**/review/${quote.id}`);
   expect(pathOf(page)).toBe(`/review/${quote.id}`);
+});
+
+test('a file the server refuses is reported without losing the request; the quote page takes more files', async (ctx) => {
+  const page = await openPage(browser(), ctx);
+  await signInAs(page, 'customer');
+  await visit(page, '/quotes/new');
+  await page.locator(sel('request-duty')).waitFor();
+  await page.locator(sel('request-reference')).fill(`Disguised upload ${Date.now()}`);
+  // named like a PDF, but plain text inside: the server checks the content
+  await page.locator(sel('attach-input')).setInputFiles({ name: 'datasheet.pdf', mimeType: 'application/pdf', buffer: Buffer.from('not a pdf at all\n') });
+  await page.locator(sel('send-request')).click();
+  const outcome = page.locator(sel('request-upload-outcome'));
+  await outcome.waitFor({ timeout: 30_000 });
+  expect(await outcome.textContent()).toMatch(/Request Q-\d{4}-\d+ was sent/);
+  const failed = page.locator(`${sel('upload-row')}[data-status="failed"]`);
+  expect(await failed.locator(sel('upload-message')).textContent()).not.toBe('');
+  expect(pathOf(page)).toBe('/quotes/new');
+
+  await page.locator(sel('request-open-quote')).click();
+  await page.locator(sel('quote-attachments')).waitFor();
+  expect(await page.locator(sel('attachment-row')).count()).toBe(0);
+  await page.locator(`${sel('quote-attachments')} ${sel('attach-input')}`).setInputFiles({ name: 'nameplate.png', mimeType: 'image/png', buffer: PNG });
+  await page.locator(sel('attach-send')).click();
+  await page.locator(sel('attachment-link')).waitFor();
+  const href = await page.locator(sel('attachment-link')).getAttribute('href');
+  const file = await page.request.get(new URL(href!, BASE_URL).toString());
+  expect(file.headers()['content-type']).toMatch(/^image\/png/);
+  expect(await page.locator(`${sel('quote-event')}[data-kind="attachment"]`).count()).toBe(1);
 });
