@@ -9,13 +9,16 @@ import type { Config } from './lib/config';
 import { csrfGuard } from './lib/csrf';
 import { errorHandler, notFoundHandler } from './lib/errors';
 import type { Mailer } from './lib/mail';
+import { createStripe } from './lib/payments';
 import { localStorage, type FileStorage } from './lib/storage';
+import type Stripe from 'stripe';
 import { sessionMiddleware } from './lib/session';
 import { authRouter } from './features/auth/routes';
 import { verifyCredentials } from './features/auth/service';
 import { fluidsRouter } from './features/fluids/routes';
 import { healthRouter } from './features/health/routes';
 import { adminRouter, organizationsRouter } from './features/organizations/routes';
+import { acceptRouter, ordersRouter, webhookHandler } from './features/orders/routes';
 import { outboxRouter } from './features/outbox/routes';
 import { priceBookRouter } from './features/pricing/routes';
 import { quotesRouter } from './features/quotes/routes';
@@ -29,14 +32,24 @@ export interface AppDeps {
   clientDir?: string;
   /** uploaded files; a folder under DATA_DIR by default */
   storage?: FileStorage;
+  /** the Stripe SDK; built from the configuration by default */
+  stripe?: Stripe;
 }
 
 const defaultClientDir = fileURLToPath(new URL('../dist', import.meta.url));
 
 /** Assembles the app in a visible order: headers → body → session → auth → routers → 404 → errors. */
-export function createApp({ config, database, mailer, clientDir = defaultClientDir, storage = localStorage(join(resolve(config.DATA_DIR), 'uploads')) }: AppDeps) {
+export function createApp({
+  config,
+  database,
+  mailer,
+  clientDir = defaultClientDir,
+  storage = localStorage(join(resolve(config.DATA_DIR), 'uploads')),
+  stripe = createStripe(config),
+}: AppDeps) {
   const { db, pool } = database;
   const deps = { db, mailer, config };
+  const orderDeps = { ...deps, storage, stripe };
   const passport = createPassport(db, (email, password) => verifyCredentials(deps, email, password));
 
   const app = express();
@@ -55,18 +68,22 @@ export function createApp({ config, database, mailer, clientDir = defaultClientD
       },
     }),
   );
+  // Stripe signs the exact bytes it sends: this one route reads its body raw, before the JSON parser
+  app.post('/api/payments/webhook', express.raw({ type: 'application/json', limit: '1mb' }), webhookHandler(orderDeps));
   app.use(express.json({ limit: '1mb' }));
   app.use('/api', sessionMiddleware(config, pool));
   app.use('/api', passport.session());
-  // the thermal API is public and stateless: it changes nothing, so it needs no cross-site guard
-  app.use('/api', csrfGuard([config.APP_URL], ['/thermal/rate', '/thermal/size']));
+  // exempt: the thermal API is public and changes nothing; the webhook is verified by its signature
+  app.use('/api', csrfGuard([config.APP_URL], ['/thermal/rate', '/thermal/size', '/payments/webhook']));
 
   app.use('/api/health', healthRouter(pool));
   app.use('/api/auth', authRouter(deps, pool, passport));
   app.use('/api/fluids', fluidsRouter());
   app.use('/api/thermal', thermalRouter(pool));
   app.use('/api/organizations', organizationsRouter(deps));
-  app.use('/api/quotes', quotesRouter({ ...deps, storage }));
+  app.use('/api/quotes', acceptRouter(orderDeps));
+  app.use('/api/quotes', quotesRouter(orderDeps));
+  app.use('/api/orders', ordersRouter(orderDeps));
   app.use('/api/admin/price-book', priceBookRouter(deps));
   app.use('/api/admin', adminRouter(deps));
   app.use('/api/dev', outboxRouter(config.OUTBOX_URL));

@@ -22,6 +22,12 @@ const envSchema = z.object({
   /** The local SMTP sink's HTTP side; enables GET /api/dev/outbox. Unset in production. */
   OUTBOX_URL: z.url().optional(),
   DATA_DIR: z.string().min(1).default('.data'),
+  /** Stripe: test keys only in local runs; STRIPE_API_URL points the SDK at the local fake (unset in production) */
+  STRIPE_SECRET_KEY: z.string().regex(/^sk_(test|live)_/, 'must be a Stripe secret key (sk_test_… or sk_live_…)').default('sk_test_bundlesmith_local'),
+  STRIPE_WEBHOOK_SECRET: z.string().regex(/^whsec_/, 'must be a webhook signing secret (whsec_…)').default('whsec_bundlesmith_local'),
+  STRIPE_API_URL: z.url().optional(),
+  /** where the buyer is sent to pay in local runs (the fake's hosted test page); unset in production */
+  STRIPE_PAY_URL: z.url().optional(),
   LOGIN_MAX_PER_ACCOUNT: z.coerce.number().int().min(1).default(8),
   LOGIN_MAX_PER_ADDRESS: z.coerce.number().int().min(1).default(60),
   LOGIN_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),

@@ -1,4 +1,4 @@
-import { desc, sql } from 'drizzle-orm';
+import { desc, eq, sql } from 'drizzle-orm';
 import type { Db } from '../../../db';
 import { priceBooks } from '../../../db/schema';
 import type { PriceBook } from '../../../shared/schemas/price-book';
@@ -42,6 +42,13 @@ export async function getActivePriceBook(db: Db): Promise<ActivePriceBook> {
   const row = await findLatestPriceBook(db);
   if (!row) throw new HttpError(503, 'no-price-book', 'No price book has been saved yet; an admin must save one (the demo seed adds version 1).');
   return { version: row.version, data: row.data, createdAt: row.createdAt };
+}
+
+/** One saved version (revisions keep the version they were priced with, e.g. for the deposit %). */
+export async function getPriceBookVersion(db: Db, version: number): Promise<PriceBook> {
+  const [row] = await db.select(columns).from(priceBooks).where(eq(priceBooks.version, version));
+  if (!row) throw new HttpError(500, 'internal', `Price book version ${version} is missing.`);
+  return row.data;
 }
 
 /** A unique-constraint violation (PostgreSQL 23505), also when drizzle wraps the driver's error. */

@@ -5,7 +5,7 @@ import { notFound } from '../../lib/errors';
 import type { QuoteDeps } from './deps';
 import { FABRICATOR, OFFER_TERMS } from './fabricator';
 import { renderOfferPdf } from './offer-pdf';
-import { activeBook } from './pricing-port';
+import { getPriceBookVersion } from '../pricing/repository';
 import { customerPrice } from './present';
 import * as repo from './repository';
 import { loadVisible } from './service';
@@ -20,7 +20,7 @@ export async function offerPdf(deps: QuoteDeps, user: SessionUser, id: string, o
   const number = opts.revision ?? (await repo.latestOfferRevision(deps.db, id)) ?? (staff ? row.currentRevision : 1);
   const rev = await repo.findRevision(deps.db, id, number);
   if (!rev || (!staff && rev.kind === 'draft')) throw notFound('No such offer for this quote.');
-  const book = await activeBook(deps);
+  const book = await getPriceBookVersion(deps.db, rev.priceBookVersion);
   const pdf = await renderOfferPdf({
     fabricator: FABRICATOR,
     customer: { organizationName: row.organizationName, contactName: row.submittedByName, contactEmail: row.submittedByEmail },
@@ -28,7 +28,7 @@ export async function offerPdf(deps: QuoteDeps, user: SessionUser, id: string, o
     revision: { ...rev.data, price: customerPrice(rev.data.price) },
     issuedAt: new Date(rev.createdAt).toISOString(),
     units: opts.units,
-    depositPct: book.data.deposit_pct,
+    depositPct: book.deposit_pct,
     showLines: 'summary',
     terms: OFFER_TERMS,
   });

@@ -1,0 +1,79 @@
+/**
+ * The buyer accepts an approved, unexpired offer: PO number, billing contact, delivery address.
+ * A PaymentIntent for the deposit is created (idempotency key per acceptance); the browser is sent
+ * to pay. Only the verified webhook moves money state (webhook.ts).
+ */
+import type { SessionUser } from '../../../shared/schemas/auth';
+import type { AcceptResult, acceptQuoteSchema } from '../../../shared/schemas/orders';
+import { HttpError } from '../../lib/errors';
+import { getPriceBookVersion } from '../pricing/repository';
+import * as quoteRepo from '../quotes/repository';
+import { loadVisible } from '../quotes/service';
+import type { OrderDeps } from './deps';
+import * as repo from './repository';
+
+type AcceptInput = ReturnType<typeof acceptQuoteSchema.parse>;
+
+export async function acceptQuote(deps: OrderDeps, buyer: SessionUser, quoteId: string, input: AcceptInput): Promise<AcceptResult> {
+  const quote = await loadVisible(deps, buyer, quoteId);
+  if (quote.status === 'accepted') return retryPayment(deps, quoteId);
+  if (quote.status !== 'approved') {
+    throw new HttpError(409, 'wrong-status', `Only an approved offer can be accepted; this quote is ${quote.status}.`);
+  }
+  if (quote.validUntil && new Date(quote.validUntil) < new Date()) {
+    throw new HttpError(409, 'offer-expired', 'This offer has expired; ask for a revised offer with "Request a change".');
+  }
+  const revision = (await quoteRepo.findRevision(deps.db, quoteId, quote.currentRevision))!;
+  const book = await getPriceBookVersion(deps.db, revision.priceBookVersion);
+  const total = revision.data.price.total_minor;
+  const deposit = Math.round((total * book.deposit_pct) / 100);
+  const acceptanceId = crypto.randomUUID();
+  const intent = await deps.stripe.paymentIntents.create(
+    {
+      amount: deposit,
+      currency: revision.data.price.currency.toLowerCase(),
+      automatic_payment_methods: { enabled: true },
+      description: `Deposit for ${quote.number} revision ${revision.number}`,
+      metadata: { quoteId, quoteNumber: quote.number, revision: String(revision.number), acceptanceId },
+    },
+    { idempotencyKey: `accept-${acceptanceId}` },
+  );
+  await deps.db.transaction(async (tx) => {
+    const ok = await quoteRepo.updateQuoteAtVersion(tx, quoteId, quote.version, { status: 'accepted' });
+    if (!ok) throw new HttpError(409, 'stale-version', 'The offer changed while you accepted it; reload and try again.');
+    await tx.insert(repo.acceptances).values({
+      id: acceptanceId,
+      quoteId,
+      revisionNumber: revision.number,
+      acceptedBy: buyer.id,
+      poNumber: input.poNumber,
+      billingContact: input.billingContact,
+      deliveryAddress: input.deliveryAddress,
+      paymentIntentId: intent.id,
+      amountMinor: deposit,
+      currency: revision.data.price.currency,
+    });
+    await quoteRepo.insertEvent(tx, { quoteId, actorId: buyer.id, kind: 'accepted', message: `Accepted with PO ${input.poNumber}; deposit requested.` });
+  });
+  return paymentResult(deps, quoteId, intent.id, intent.client_secret ?? '', deposit, revision.data.price.currency);
+}
+
+/** Accepted but not paid (a declined card, a closed tab): the same PaymentIntent, paid again. */
+async function retryPayment(deps: OrderDeps, quoteId: string): Promise<AcceptResult> {
+  const open = await repo.openAcceptance(deps.db, quoteId);
+  if (!open) throw new HttpError(409, 'wrong-status', 'This offer is accepted and its deposit is being processed.');
+  const intent = await deps.stripe.paymentIntents.retrieve(open.paymentIntentId);
+  return paymentResult(deps, quoteId, intent.id, intent.client_secret ?? '', open.amountMinor, open.currency);
+}
+
+function paymentResult(deps: OrderDeps, quoteId: string, id: string, clientSecret: string, amount: number, currency: string): AcceptResult {
+  const returnUrl = `${deps.config.APP_URL}/quotes/${quoteId}?payment=returned`;
+  const base = deps.config.STRIPE_PAY_URL;
+  return {
+    paymentIntentId: id,
+    clientSecret,
+    amount_minor: amount,
+    currency,
+    paymentUrl: base ? `${base}/pay/${id}?return_url=${encodeURIComponent(returnUrl)}` : returnUrl,
+  };
+}

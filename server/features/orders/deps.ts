@@ -1,0 +1,6 @@
+import type Stripe from 'stripe';
+import type { QuoteDeps } from '../quotes/deps';
+
+export interface OrderDeps extends QuoteDeps {
+  stripe: Stripe;
+}

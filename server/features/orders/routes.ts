@@ -1,0 +1,56 @@
+import { Router, type RequestHandler } from 'express';
+import { z } from 'zod';
+import { acceptQuoteSchema, advanceOrderSchema, cancelOrderSchema, listOrdersQuerySchema } from '../../../shared/schemas/orders';
+import { currentUser, requireRole, requireUser } from '../../lib/auth/guards';
+import { parse } from '../../lib/validate';
+import { acceptQuote } from './accept';
+import type { OrderDeps } from './deps';
+import { drillingCsv, drillingPattern } from './drilling';
+import { advanceOrder, cancelOrder, getOrder, listOrders, releaseOrder } from './service';
+import { handleEvent, verifyEvent } from './webhook';
+
+const idParams = z.object({ id: z.uuid({ error: 'must be an id (UUID)' }) });
+const noteBody = z.object({ note: z.string().trim().max(2000).optional() });
+
+/** `POST /api/quotes/:id/accept`: the buyer accepts an approved offer and is sent to pay the deposit. */
+export function acceptRouter(deps: OrderDeps): Router {
+  const r = Router();
+  r.post('/:id/accept', requireRole('customer'), async (req, res) => {
+    const { id } = parse(idParams, req.params, 'path');
+    res.status(201).json(await acceptQuote(deps, currentUser(req), id, parse(acceptQuoteSchema, req.body)));
+  });
+  return r;
+}
+
+export function ordersRouter(deps: OrderDeps): Router {
+  const r = Router();
+  const id = (req: { params: unknown }) => parse(idParams, req.params, 'path').id;
+  r.get('/', requireUser, async (req, res) => {
+    res.json(await listOrders(deps, currentUser(req), parse(listOrdersQuerySchema, req.query, 'query')));
+  });
+  r.get('/:id', requireUser, async (req, res) => {
+    res.json(await getOrder(deps, currentUser(req), id(req)));
+  });
+  r.post('/:id/release', requireRole('sales', 'admin'), async (req, res) => {
+    res.json(await releaseOrder(deps, currentUser(req), id(req), parse(noteBody, req.body).note));
+  });
+  r.post('/:id/advance', requireRole('shop', 'admin'), async (req, res) => {
+    res.json(await advanceOrder(deps, currentUser(req), id(req), parse(advanceOrderSchema, req.body)));
+  });
+  r.post('/:id/cancel', requireUser, async (req, res) => {
+    res.json(await cancelOrder(deps, currentUser(req), id(req), parse(cancelOrderSchema, req.body).reason));
+  });
+  r.get('/:id/drilling.csv', requireRole('sales', 'shop', 'admin'), async (req, res) => {
+    const order = await getOrder(deps, currentUser(req), id(req));
+    res.type('text/csv').set('Content-Disposition', `attachment; filename="${order.number}-drilling.csv"`).send(drillingCsv(drillingPattern(order.design)));
+  });
+  return r;
+}
+
+/** `POST /api/payments/webhook`, mounted with a raw body parser: the signature covers the exact bytes. */
+export function webhookHandler(deps: OrderDeps): RequestHandler {
+  return async (req, res) => {
+    const event = verifyEvent(deps, Buffer.isBuffer(req.body) ? req.body : undefined, req.get('stripe-signature'));
+    res.json({ received: true, outcome: await handleEvent(deps, event) });
+  };
+}

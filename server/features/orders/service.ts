@@ -1,0 +1,128 @@
+/** Orders: who sees which, and the shop's steps from release to shipment. */
+import type { SessionUser } from '../../../shared/schemas/auth';
+import { orderSteps, type ListOrdersQuery, type Order, type OrderStatus } from '../../../shared/schemas/orders';
+import type { advanceOrderSchema } from '../../../shared/schemas/orders';
+import { isStaff } from '../../lib/auth/guards';
+import { forbidden, HttpError, notFound } from '../../lib/errors';
+import { getPriceBookVersion } from '../pricing/repository';
+import * as quoteRepo from '../quotes/repository';
+import type { OrderDeps } from './deps';
+import { notifyStep } from './notify';
+import * as repo from './repository';
+
+export async function loadOrder(deps: OrderDeps, viewer: SessionUser, id: string) {
+  const row = await repo.findOrder(deps.db, id);
+  if (!row || (!isStaff(viewer) && row.organizationId !== viewer.organizationId)) throw notFound('No such order.');
+  return row;
+}
+
+export async function getOrder(deps: OrderDeps, viewer: SessionUser, id: string): Promise<Order> {
+  const row = await loadOrder(deps, viewer, id);
+  const [revision, events] = await Promise.all([quoteRepo.findRevision(deps.db, row.quoteId, row.revisionNumber), repo.timeline(deps.db, id)]);
+  return {
+    id: row.id,
+    number: row.number,
+    quoteId: row.quoteId,
+    quoteNumber: row.quoteNumber,
+    organizationId: row.organizationId,
+    organizationName: row.organizationName,
+    status: row.status,
+    poNumber: row.poNumber,
+    needBy: row.needBy,
+    total_minor: row.totalMinor,
+    deposit_minor: row.depositMinor,
+    refunded_minor: row.refundedMinor,
+    currency: row.currency,
+    design: revision!.data.design,
+    quantity: revision!.data.price.quantity,
+    timeline: events.map((e) => ({ status: e.status, note: e.note, by: e.by, at: new Date(e.at).toISOString() })),
+    createdAt: new Date(row.createdAt).toISOString(),
+    updatedAt: new Date(row.updatedAt).toISOString(),
+  };
+}
+
+export async function listOrders(deps: OrderDeps, viewer: SessionUser, query: ListOrdersQuery) {
+  const { items, total } = await repo.listOrders(deps.db, query, isStaff(viewer) ? undefined : viewer.organizationId);
+  return {
+    items: items.map((o) => ({
+      id: o.id, number: o.number, quoteId: o.quoteId, quoteNumber: o.quoteNumber, organizationName: o.organizationName,
+      status: o.status, poNumber: o.poNumber, needBy: o.needBy, total_minor: o.totalMinor, currency: o.currency,
+      createdAt: new Date(o.createdAt).toISOString(), updatedAt: new Date(o.updatedAt).toISOString(),
+    })),
+    total,
+    page: query.page,
+    pageSize: query.pageSize,
+  };
+}
+
+async function move(deps: OrderDeps, user: SessionUser, id: string, from: OrderStatus, to: OrderStatus, note?: string | null, extra: Record<string, unknown> = {}) {
+  const ok = await repo.moveOrder(deps.db, id, from, { status: to, ...extra });
+  if (!ok) throw new HttpError(409, 'stale-status', 'The order moved on meanwhile; reload it.');
+  await repo.addEvent(deps.db, id, user.id, to, note ?? null);
+  await notifyStep(deps, id, to, note);
+  return getOrder(deps, user, id);
+}
+
+/** Sales hand a paid order to the shop. */
+export async function releaseOrder(deps: OrderDeps, user: SessionUser, id: string, note?: string) {
+  const row = await loadOrder(deps, user, id);
+  if (row.status !== 'deposit-paid') throw new HttpError(409, 'wrong-status', `Only an order with its deposit paid can be released; this one is ${row.status}.`);
+  return move(deps, user, id, 'deposit-paid', 'released', note);
+}
+
+type Advance = ReturnType<typeof advanceOrderSchema.parse>;
+
+/**
+ * The shop moves an order one step on (or on hold, and back). Leaving the hydrotest needs the test
+ * pressure and a pass; a failed test keeps the order at the hydrotest.
+ */
+export async function advanceOrder(deps: OrderDeps, user: SessionUser, id: string, input: Advance) {
+  const row = await loadOrder(deps, user, id);
+  const from = row.status;
+  if (from === 'on-hold') {
+    if (input.to !== row.heldFrom) throw new HttpError(409, 'wrong-step', `An order on hold resumes at the step it left: ${row.heldFrom}.`);
+    return move(deps, user, id, from, input.to, input.note, { heldFrom: null });
+  }
+  const at = orderSteps.indexOf(from as (typeof orderSteps)[number]);
+  if (at < orderSteps.indexOf('released') || from === 'shipped') {
+    throw new HttpError(409, 'wrong-status', `The shop moves orders from release to shipment; this one is ${from}.`);
+  }
+  if (input.to === 'on-hold') return move(deps, user, id, from, 'on-hold', input.note, { heldFrom: from });
+  const next = orderSteps[at + 1];
+  if (input.to !== next) throw new HttpError(409, 'wrong-step', `The next step after ${from} is ${next}, not ${input.to}.`);
+  if (from === 'hydrotest') {
+    if (input.hydrotestPressure_Pa === undefined || input.hydrotestPassed === undefined) {
+      throw new HttpError(400, 'invalid-input', 'Record the hydrotest: the test pressure and whether it passed.', {
+        hydrotestPressure_Pa: 'required to leave the hydrotest',
+        hydrotestPassed: 'required to leave the hydrotest',
+      });
+    }
+    if (!input.hydrotestPassed) throw new HttpError(422, 'hydrotest-failed', 'A failed hydrotest keeps the order at the hydrotest: repair, then test again.');
+    const note = `Hydrotest passed at ${(input.hydrotestPressure_Pa / 1e5).toFixed(1)} bar(g).${input.note ? ` ${input.note}` : ''}`;
+    return move(deps, user, id, from, next, note, { hydrotestPressurePa: Math.round(input.hydrotestPressure_Pa) });
+  }
+  return move(deps, user, id, from, next!, input.note);
+}
+
+const BEFORE_FABRICATION: OrderStatus[] = ['deposit-paid', 'released'];
+
+/**
+ * Cancellation: before fabrication starts the buyer or sales may cancel (the deposit back, less the
+ * price book's cancellation fee once released); after that only an admin. The refund goes through
+ * Stripe and the `charge.refunded` webhook records it.
+ */
+export async function cancelOrder(deps: OrderDeps, user: SessionUser, id: string, reason: string) {
+  const row = await loadOrder(deps, user, id);
+  if (row.status === 'cancelled' || row.status === 'shipped') throw new HttpError(409, 'wrong-status', `An order that is ${row.status} cannot be cancelled.`);
+  const started = !BEFORE_FABRICATION.includes(row.status);
+  if (user.role === 'shop' || (started && user.role !== 'admin')) throw forbidden('Fabrication has started: only an admin can cancel this order now.');
+  const revision = (await quoteRepo.findRevision(deps.db, row.quoteId, row.revisionNumber))!;
+  const book = await getPriceBookVersion(deps.db, revision.priceBookVersion);
+  const fee = row.status === 'deposit-paid' ? 0 : Math.min(row.depositMinor, Math.round((row.totalMinor * book.cancellationFee_pct) / 100));
+  const refund = row.depositMinor - fee;
+  if (refund > 0) {
+    await deps.stripe.refunds.create({ payment_intent: row.paymentIntentId, amount: refund, metadata: { orderId: id } }, { idempotencyKey: `cancel-${id}` });
+  }
+  const note = `Cancelled: ${reason} Refund ${refund} of ${row.depositMinor} (minor units)${fee ? `, cancellation fee ${fee}` : ''}.`;
+  return move(deps, user, id, row.status, 'cancelled', note, { heldFrom: null });
+}
