@@ -6,6 +6,7 @@ ensure_node_modules
 setup_database
 seed_db
 start_bg smtp-sink node --import tsx server/fakes/smtp-sink/index.ts
+start_bg stripe-fake node --import tsx server/fakes/stripe/index.ts
 trap 'kill 0' EXIT
 npx tsx watch server/index.ts &
 npx vite

@@ -9,6 +9,8 @@ seed_db
 
 start_bg smtp-sink node --import tsx server/fakes/smtp-sink/index.ts
 wait_port "$SMTP_SINK_PORT" 30 || die "the SMTP sink did not start (log: $DATA_DIR/logs/smtp-sink.log)"
+start_bg stripe-fake node --import tsx server/fakes/stripe/index.ts
+wait_port "$STRIPE_FAKE_PORT" 30 || die "the Stripe fake did not start (log: $DATA_DIR/logs/stripe-fake.log)"
 
 log "building the client"
 npx vite build --logLevel warn

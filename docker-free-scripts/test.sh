@@ -32,6 +32,9 @@ stop_bg smtp-sink   # a sink left from a run by hand: start afresh with an empty
 rm -rf "$DATA_DIR/mail"
 start_bg smtp-sink node --import tsx server/fakes/smtp-sink/index.ts
 wait_port "$SMTP_SINK_PORT" 30 || die "the SMTP sink did not start"
+stop_bg stripe-fake
+start_bg stripe-fake node --import tsx server/fakes/stripe/index.ts
+wait_port "$STRIPE_FAKE_PORT" 30 || die "the Stripe fake did not start"
 
 failed=()
 step() {

@@ -5,6 +5,8 @@ import { currentUser, requireRole, requireUser } from '../../lib/auth/guards';
 import { parse } from '../../lib/validate';
 import { acceptQuote } from './accept';
 import type { OrderDeps } from './deps';
+import { buildSheet } from './build-sheet';
+import { renderBuildSheetPdf } from './build-sheet-pdf';
 import { drillingCsv, drillingPattern } from './drilling';
 import { advanceOrder, cancelOrder, getOrder, listOrders, releaseOrder } from './service';
 import { handleEvent, verifyEvent } from './webhook';
@@ -39,6 +41,13 @@ export function ordersRouter(deps: OrderDeps): Router {
   });
   r.post('/:id/cancel', requireUser, async (req, res) => {
     res.json(await cancelOrder(deps, currentUser(req), id(req), parse(cancelOrderSchema, req.body).reason));
+  });
+  r.get('/:id/build-sheet', requireRole('sales', 'shop', 'admin'), async (req, res) => {
+    res.json(await buildSheet(deps, currentUser(req), id(req)));
+  });
+  r.get('/:id/build-sheet.pdf', requireRole('sales', 'shop', 'admin'), async (req, res) => {
+    const sheet = await buildSheet(deps, currentUser(req), id(req));
+    res.type('application/pdf').set('Content-Disposition', `inline; filename="${sheet.order.number}-build-sheet.pdf"`).send(await renderBuildSheetPdf(sheet));
   });
   r.get('/:id/drilling.csv', requireRole('sales', 'shop', 'admin'), async (req, res) => {
     const order = await getOrder(deps, currentUser(req), id(req));
