@@ -162,8 +162,14 @@ export const quoteDetailSchema = quoteSummarySchema.extend({
   budgetRange: z.object({ low_minor: z.int(), high_minor: z.int() }).nullable(),
   attachments: z.array(attachmentSchema),
   events: z.array(quoteEventSchema),
+  /** the buyer's deposit payment once the offer is accepted (latest acceptance), else null */
+  payment: z
+    .object({ status: z.enum(['awaiting-payment', 'payment-failed', 'paid', 'canceled']), lastError: z.string().nullable(), amount_minor: z.int(), currency: z.string() })
+    .nullable(),
+  /** the order made from this quote once its deposit is paid */
+  orderId: z.uuid().nullable(),
   /** what the signed-in user may do now */
-  can: z.object({ edit: z.boolean(), approve: z.boolean(), decline: z.boolean(), requestChange: z.boolean(), accept: z.boolean() }),
+  can: z.object({ edit: z.boolean(), approve: z.boolean(), decline: z.boolean(), requestChange: z.boolean(), accept: z.boolean(), pay: z.boolean() }),
 });
 export type QuoteDetail = z.infer<typeof quoteDetailSchema>;
 

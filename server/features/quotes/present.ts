@@ -68,6 +68,8 @@ export function toDetail(
     revisions: Awaited<ReturnType<typeof repo.listRevisions>>;
     attachments: Awaited<ReturnType<typeof repo.listAttachments>>;
     events: Awaited<ReturnType<typeof repo.listEvents>>;
+    payment: Awaited<ReturnType<typeof repo.paymentState>>['payment'];
+    orderId: string | null;
   },
 ): QuoteDetail {
   const staff = isStaff(viewer);
@@ -98,12 +100,16 @@ export function toDetail(
       actor: e.actorName ? { name: e.actorName, role: e.actorRole! } : null,
       createdAt: new Date(e.createdAt).toISOString(),
     })),
+    payment: parts.payment,
+    orderId: parts.orderId,
     can: {
       edit: sales && open,
       approve: sales && open,
       decline: sales && (open || row.status === 'approved'),
       requestChange: viewer.role === 'customer' && ['in-review', 'questions', 'approved'].includes(row.status),
       accept: viewer.role === 'customer' && row.status === 'approved' && !summary.expired,
+      // accepted but the deposit not (yet) paid: pay again with the same PaymentIntent
+      pay: viewer.role === 'customer' && row.status === 'accepted' && parts.payment?.status !== 'paid',
     },
   };
 }

@@ -1,7 +1,7 @@
 import { and, asc, count, desc, eq, ilike, or, sql, type SQL } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/pg-core';
 import type { Db } from '../../../db';
-import { attachments, organizations, quoteEvents, quoteRevisions, quotes, users } from '../../../db/schema';
+import { acceptances, attachments, orders, organizations, quoteEvents, quoteRevisions, quotes, users } from '../../../db/schema';
 import type { ListQuotesQuery, Revision } from '../../../shared/schemas/quotes';
 
 export type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
@@ -207,4 +207,16 @@ export async function insertAttachment(db: Executor, values: typeof attachments.
 export async function staffEmails(db: Executor, role: 'sales' | 'shop' | 'admin') {
   const rows = await db.select({ email: users.email }).from(users).where(and(eq(users.role, role), sql`${users.disabledAt} is null`));
   return rows.map((r) => r.email);
+}
+
+/** The latest acceptance's payment state and the order, if any (for the quote page). */
+export async function paymentState(db: Executor, quoteId: string) {
+  const [acceptance] = await db
+    .select({ status: acceptances.status, lastError: acceptances.lastError, amount_minor: acceptances.amountMinor, currency: acceptances.currency })
+    .from(acceptances)
+    .where(eq(acceptances.quoteId, quoteId))
+    .orderBy(desc(acceptances.createdAt))
+    .limit(1);
+  const [order] = await db.select({ id: orders.id }).from(orders).where(eq(orders.quoteId, quoteId));
+  return { payment: acceptance ?? null, orderId: order?.id ?? null };
 }

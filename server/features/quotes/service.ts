@@ -58,12 +58,13 @@ export async function getQuote(deps: QuoteDeps, viewer: SessionUser, id: string,
   const number = revisionNumber ?? (staff ? row.currentRevision : await customerRevisionNumber(deps, id, row.currentRevision));
   const rev = await repo.findRevision(deps.db, id, number);
   if (!rev || (!staff && rev.kind === 'draft')) throw notFound('No such revision of this quote.');
-  const [revisions, attachments, events] = await Promise.all([
+  const [revisions, attachments, events, payment] = await Promise.all([
     repo.listRevisions(deps.db, id),
     repo.listAttachments(deps.db, id),
     repo.listEvents(deps.db, id, staff),
+    repo.paymentState(deps.db, id),
   ]);
-  return toDetail(viewer, row, rev.data, { revisions, attachments, events });
+  return toDetail(viewer, row, rev.data, { revisions, attachments, events, ...payment });
 }
 
 async function customerRevisionNumber(deps: QuoteDeps, id: string, current: number): Promise<number> {
