@@ -28,10 +28,20 @@ export function queuedMailer(jobs: Jobs): Mailer {
   };
 }
 
+/**
+ * Sends queued mail: up to 20 messages per fetch, in parallel. A message that fails is failed on
+ * its own (pg-boss retries it later); the others in the batch complete, so none is sent twice.
+ */
 export async function startMailWorker(jobs: Jobs, transport: Transporter, from: string): Promise<void> {
-  await jobs.work<MailMessage>(QUEUES.mail, { pollingIntervalSeconds: 0.5 }, async (batch) => {
-    for (const job of batch) {
-      await transport.sendMail({ from, ...job.data });
-    }
+  await jobs.work<MailMessage>(QUEUES.mail, { pollingIntervalSeconds: 0.5, batchSize: 20 }, async (batch) => {
+    await Promise.all(
+      batch.map(async (job) => {
+        try {
+          await transport.sendMail({ from, ...job.data });
+        } catch (err) {
+          await jobs.fail(QUEUES.mail, job.id, { message: (err as Error).message });
+        }
+      }),
+    );
   });
 }
