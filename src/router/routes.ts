@@ -84,6 +84,30 @@ export const routes: RouteRecordRaw[] = [
         meta: { title: 'Quote review', roles: ['sales', 'admin'] },
       },
       {
+        path: 'staff/orders',
+        name: 'staff-orders',
+        component: () => import('../views/orders-staff/list/index.vue'),
+        meta: { title: 'Orders', roles: ['sales', 'admin'], nav: { label: 'Orders', order: 40 } },
+      },
+      {
+        path: 'staff/orders/:id',
+        name: 'staff-order',
+        component: () => import('../views/orders-staff/detail/index.vue'),
+        meta: { title: 'Order', roles: ['sales', 'admin'] },
+      },
+      {
+        path: 'shop',
+        name: 'shop-board',
+        component: () => import('../views/shop/board/index.vue'),
+        meta: { title: 'Shop board', roles: ['shop', 'admin'], nav: { label: 'Shop board', order: 50 } },
+      },
+      {
+        path: 'shop/orders/:id/build-sheet',
+        name: 'build-sheet',
+        component: () => import('../views/shop/build-sheet/index.vue'),
+        meta: { title: 'Build sheet', roles: ['shop', 'sales', 'admin'] },
+      },
+      {
         path: 'admin/price-book',
         name: 'admin-price-book',
         component: () => import('../views/admin/price-book/index.vue'),

@@ -61,6 +61,11 @@ export const roleGuides: Record<Role, RoleGuide> = {
         route: 'review-queue',
       },
       {
+        title: 'Orders',
+        text: 'Paid orders with their steps and who moved them: release a paid order to the shop, cancel with a refund before fabrication, open its build sheet.',
+        route: 'staff-orders',
+      },
+      {
         title: 'Correct, revise and approve',
         text:
           'Open a quote from the queue: change the duty or the geometry and see it re-rated at once, override price lines ' +
@@ -79,19 +84,22 @@ export const roleGuides: Record<Role, RoleGuide> = {
     summary:
       'Every accepted order becomes a build sheet derived from the approved design, so what is drilled is what was ' +
       'sold.',
-    now: [],
-    coming: [
+    now: [
+      {
+        title: 'Shop board',
+        text:
+          'Released orders by step, soonest need-by first: move each on as its step is done (the hydrotest asks for ' +
+          'the pressure and the result), hold and resume, so sales and the customer see where it stands.',
+        route: 'shop-board',
+      },
       {
         title: 'Build sheets',
         text:
-          'Bill of materials, cut list, tubesheet drilling pattern with hole coordinates, hydrotest pressure and ' +
-          'inspection points, as PDF and CSV.',
-      },
-      {
-        title: 'Report progress',
-        text: 'Mark each order’s stages as they are done so sales and the customer see where it stands.',
+          'From each card on the board: bill of materials, cut list, the tubesheet drilling pattern to scale, ' +
+          'hydrotest pressure and inspection points, with the PDF and the drilling CSV.',
       },
     ],
+    coming: [],
   },
   admin: {
     heading: 'Keep the house in order',
@@ -116,6 +124,16 @@ export const roleGuides: Record<Role, RoleGuide> = {
         title: 'Review queue',
         text: 'Every customer request and where it stands; you can review and approve like a sales engineer.',
         route: 'review-queue',
+      },
+      {
+        title: 'Orders',
+        text: 'Every order and its timeline; you may cancel at any step before shipment.',
+        route: 'staff-orders',
+      },
+      {
+        title: 'Shop board',
+        text: 'The released orders by step, as the shop sees them.',
+        route: 'shop-board',
       },
     ],
     coming: [

@@ -1,0 +1,90 @@
+/**
+ * The shop board's state: the released orders by step (one `GET /api/orders?status=` per lane, the
+ * server ordering by need-by), each order's detail for its tubes and the step it was held at, the
+ * number shipped, and the moves. After a move the board reloads, so it shows what the server holds.
+ */
+import { computed, reactive, ref } from 'vue';
+import { orderSteps, type Order, type OrderStatus } from '@shared/schemas/orders';
+import { errorMessage } from '../../../api/http';
+import { advanceOrder, fetchOrder, fetchOrders, type AdvanceOrderInput, type OrderSummary } from '../../../api/orders';
+
+/** The lanes of the board, in shop order: released up to ready to ship, then on hold. */
+export const BOARD_STEPS = ['released', 'cutting', 'tubing', 'shell-and-heads', 'hydrotest', 'ready-to-ship'] as const satisfies readonly OrderStatus[];
+export type BoardLane = (typeof BOARD_STEPS)[number] | 'on-hold';
+const LANES: BoardLane[] = [...BOARD_STEPS, 'on-hold'];
+
+export const nextStep = (status: OrderStatus): OrderStatus | undefined => {
+  const at = orderSteps.indexOf(status as (typeof orderSteps)[number]);
+  return at < 0 ? undefined : orderSteps[at + 1];
+};
+
+/** The step an order on hold left: the status of the event before its latest hold. */
+export function heldFrom(order: Order): OrderStatus | undefined {
+  const t = order.timeline;
+  for (let i = t.length - 1; i > 0; i--) if (t[i]!.status === 'on-hold') return t[i - 1]!.status;
+  return undefined;
+}
+
+export function useShopBoard() {
+  const lanes = reactive(Object.fromEntries(LANES.map((l) => [l, [] as OrderSummary[]])) as Record<BoardLane, OrderSummary[]>);
+  const details = reactive(new Map<string, Order>());
+  const shipped = ref<OrderSummary[]>([]);
+  const shippedTotal = ref(0);
+  const loading = ref(false);
+  const failure = ref<string | null>(null);
+  const latestFirst = ref(false);
+  /** the order being moved, and the last error of each card */
+  const moving = ref<string | null>(null);
+  const errors = reactive<Record<string, string>>({});
+
+  async function load(): Promise<void> {
+    loading.value = true;
+    failure.value = null;
+    try {
+      const [lists, done] = await Promise.all([
+        Promise.all(LANES.map((status) => fetchOrders({ status, sort: 'needBy', pageSize: 100 }))),
+        fetchOrders({ status: 'shipped', sort: '-updated', pageSize: 20 }),
+      ]);
+      LANES.forEach((lane, i) => (lanes[lane] = lists[i]!.items));
+      shipped.value = done.items;
+      shippedTotal.value = done.total;
+      const ids = lists.flatMap((l) => l.items.map((o) => o.id));
+      const orders = await Promise.all(ids.map((id) => fetchOrder(id).catch(() => null)));
+      details.clear();
+      for (const o of orders) if (o) details.set(o.id, o);
+    } catch (error) {
+      failure.value = errorMessage(error);
+    } finally {
+      loading.value = false;
+    }
+  }
+
+  // Need-by order within each lane; orders without a date go last either way.
+  const sorted = computed(() => {
+    const key = (o: OrderSummary) => o.needBy ?? (latestFirst.value ? '' : '9999');
+    const out = {} as Record<BoardLane, OrderSummary[]>;
+    for (const lane of LANES) {
+      out[lane] = [...lanes[lane]].sort((a, b) => (latestFirst.value ? key(b).localeCompare(key(a)) : key(a).localeCompare(key(b))));
+    }
+    return out;
+  });
+
+  /** Sends one move; resolves to the server's message when refused (the board reloads either way on success). */
+  async function move(order: OrderSummary, input: AdvanceOrderInput, onCard = true): Promise<string | null> {
+    moving.value = order.id;
+    delete errors[order.id];
+    try {
+      await advanceOrder(order.id, input);
+      await load();
+      return null;
+    } catch (error) {
+      const message = errorMessage(error);
+      if (onCard) errors[order.id] = message;
+      return message;
+    } finally {
+      moving.value = null;
+    }
+  }
+
+  return { lanes: sorted, details, shipped, shippedTotal, loading, failure, latestFirst, moving, errors, load, move };
+}
