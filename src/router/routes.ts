@@ -1,5 +1,6 @@
 import type { RouteRecordRaw } from 'vue-router';
 import type { Role } from '@shared/schemas/auth';
+import { staffToOrderWorkspace } from '../views/orders/staff-redirect';
 import { staffToWorkspace } from '../views/quotes/staff-redirect';
 
 declare module 'vue-router' {
@@ -70,6 +71,20 @@ export const routes: RouteRecordRaw[] = [
         component: () => import('../views/quotes/detail/index.vue'),
         beforeEnter: staffToWorkspace,
         meta: { title: 'Quote' },
+      },
+      // The customer's orders. `/orders/:id` is where order e-mails link; staff go to their order page.
+      {
+        path: 'orders',
+        name: 'orders',
+        component: () => import('../views/orders/list/index.vue'),
+        meta: { title: 'My orders', roles: ['customer'], nav: { label: 'My orders', order: 27 } },
+      },
+      {
+        path: 'orders/:id',
+        name: 'order',
+        component: () => import('../views/orders/detail/index.vue'),
+        beforeEnter: staffToOrderWorkspace,
+        meta: { title: 'Order' },
       },
       {
         path: 'review',

@@ -37,15 +37,18 @@ export const roleGuides: Record<Role, RoleGuide> = {
           'download approved offers as PDF.',
         route: 'quotes',
       },
+      {
+        title: 'My orders',
+        text:
+          'Accept an approved offer with your PO number and pay the deposit by card; then follow each order ' +
+          'through the shop, step by step, up to shipment.',
+        route: 'orders',
+      },
     ],
     coming: [
       {
         title: 'Compare options',
         text: 'Compare the design options of a request side by side.',
-      },
-      {
-        title: 'Accept and track orders',
-        text: 'Accept an offer with your PO number, pay the deposit and watch the order move through the shop.',
       },
     ],
   },
