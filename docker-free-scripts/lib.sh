@@ -66,7 +66,8 @@ ensure_postgres_installed() {
 
 # Run a command as the postgres system user (PostgreSQL refuses to run as root).
 as_pg() {
-  if [ "$(id -u)" = 0 ]; then runuser -u postgres -- "$@"; else "$@"; fi
+  # from / : the postgres user may not be allowed into the checkout (a private home folder)
+  if [ "$(id -u)" = 0 ]; then (cd / && runuser -u postgres -- "$@"); else "$@"; fi
 }
 
 # 3. The cluster: $DATA_DIR/pg, unless the postgres user cannot reach that folder (a private home
