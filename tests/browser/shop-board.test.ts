@@ -82,6 +82,8 @@ test('sales release a paid order; the shop moves it to shipped, recording the hy
   await sales.locator(sel('nav-staff-orders')).click();
   await sales.locator(sel('orders-table')).waitFor();
   await sales.locator(sel('orders-search')).fill(order.number);
+  await sales.locator(`${sel('orders-row')}[data-number="${order.number}"]`).waitFor();
+  await shot(sales, 'orders-1280');
   await sales.locator(`${sel('orders-row')}[data-number="${order.number}"]`).click();
   await sales.locator(sel('order-header')).waitFor();
   expect(pathOf(sales)).toBe(`/staff/orders/${order.orderId}`);
