@@ -63,6 +63,7 @@ async function acceptOffer(page: Page, po: string): Promise<void> {
   await page.locator(sel('accept-contact-email')).fill('Imke.Vandersloot@Pellmar.example');
   await page.locator(sel('accept-review')).click();
   await page.locator(sel('accept-confirm')).waitFor();
+  await page.screenshot({ path: `test-results/order-journey-accept-${page.viewportSize()?.width}.png`, fullPage: true });
   expect(await page.locator(sel('accept-confirm-po')).textContent()).toBe(po);
   await page.locator(sel('accept-submit')).click();
 }
