@@ -99,7 +99,7 @@ test('sales release a paid order; the shop moves it to shipped, recording the hy
   await signInAs(shop, 'shop');
   await shop.locator(sel('nav-shop-board')).click();
   await shop.locator(card(order.number, 'released')).waitFor();
-  expect(await shop.locator(card(order.number)).locator(sel('card-tubes')).textContent()).toContain(`${order.tubeCount} ×`);
+  await shop.locator(card(order.number)).locator(sel('card-tubes')).filter({ hasText: `${order.tubeCount} ×` }).waitFor();
   for (const [from, to] of [['released', 'cutting'], ['cutting', 'tubing'], ['tubing', 'shell-and-heads'], ['shell-and-heads', 'hydrotest']]) {
     await shop.locator(card(order.number, from)).locator(sel('card-move')).click();
     await shop.locator(`${sel('board-column')}[data-step="${to}"] ${card(order.number, to)}`).waitFor();
@@ -173,4 +173,20 @@ test('on a phone the board stacks its columns and the build sheet still draws th
   expect(await page.locator(`${sel('drill-hole')}[data-kind="tube"]`).count()).toBe(order.tubeCount);
   expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(phone.width);
   await shot(page, 'build-sheet-390');
+});
+
+test('sales cancel a paid order with a reason; the timeline keeps it and the actions go', async (ctx) => {
+  const order = await paidOrder();
+  const page = await openPage(browser(), ctx);
+  await signInAs(page, 'sales');
+  await visit(page, `/staff/orders/${order.orderId}`);
+  await page.locator(sel('order-cancel')).click();
+  expect(await page.locator(sel('cancel-confirm')).isDisabled()).toBe(true);
+  await page.locator(sel('cancel-reason')).fill('The customer’s compressor project was postponed.');
+  await page.locator(sel('cancel-confirm')).click();
+  await page.waitForFunction(() => document.querySelector('[data-test="order-status"]')?.textContent?.includes('Cancelled'));
+  // the cancellation note (a second event records the refund when Stripe's webhook confirms it)
+  await page.locator(`${sel('order-event')}[data-status="cancelled"]`).filter({ hasText: 'compressor project was postponed' }).waitFor();
+  expect(await page.locator(sel('order-release')).count()).toBe(0);
+  await page.locator(sel('order-no-actions')).waitFor();
 });
