@@ -4,7 +4,8 @@
  * to pay. Only the verified webhook moves money state (webhook.ts).
  */
 import type { SessionUser } from '../../../shared/schemas/auth';
-import type { AcceptResult, acceptQuoteSchema } from '../../../shared/schemas/orders';
+import { acceptQuoteSchema, type AcceptResult } from '../../../shared/schemas/orders';
+import { parse } from '../../lib/validate';
 import { HttpError } from '../../lib/errors';
 import { getPriceBookVersion } from '../pricing/repository';
 import * as quoteRepo from '../quotes/repository';
@@ -12,11 +13,14 @@ import { loadVisible } from '../quotes/service';
 import type { OrderDeps } from './deps';
 import * as repo from './repository';
 
-type AcceptInput = ReturnType<typeof acceptQuoteSchema.parse>;
-
-export async function acceptQuote(deps: OrderDeps, buyer: SessionUser, quoteId: string, input: AcceptInput): Promise<AcceptResult> {
+/**
+ * The body is read only for a first acceptance; an accepted, unpaid quote keeps the details it was
+ * accepted with, and the call just hands out the same payment again.
+ */
+export async function acceptQuote(deps: OrderDeps, buyer: SessionUser, quoteId: string, body: unknown): Promise<AcceptResult> {
   const quote = await loadVisible(deps, buyer, quoteId);
   if (quote.status === 'accepted') return retryPayment(deps, quoteId);
+  const input = parse(acceptQuoteSchema, body);
   if (quote.status !== 'approved') {
     throw new HttpError(409, 'wrong-status', `Only an approved offer can be accepted; this quote is ${quote.status}.`);
   }

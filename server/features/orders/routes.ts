@@ -1,6 +1,6 @@
 import { Router, type RequestHandler } from 'express';
 import { z } from 'zod';
-import { acceptQuoteSchema, advanceOrderSchema, cancelOrderSchema, listOrdersQuerySchema } from '../../../shared/schemas/orders';
+import { advanceOrderSchema, cancelOrderSchema, listOrdersQuerySchema } from '../../../shared/schemas/orders';
 import { currentUser, requireRole, requireUser } from '../../lib/auth/guards';
 import { parse } from '../../lib/validate';
 import { acceptQuote } from './accept';
@@ -19,7 +19,7 @@ export function acceptRouter(deps: OrderDeps): Router {
   const r = Router();
   r.post('/:id/accept', requireRole('customer'), async (req, res) => {
     const { id } = parse(idParams, req.params, 'path');
-    res.status(201).json(await acceptQuote(deps, currentUser(req), id, parse(acceptQuoteSchema, req.body)));
+    res.status(201).json(await acceptQuote(deps, currentUser(req), id, req.body));
   });
   return r;
 }

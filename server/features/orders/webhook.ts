@@ -73,7 +73,7 @@ async function depositPaid(deps: OrderDeps, intent: Stripe.PaymentIntent): Promi
     await tx.update(repo.acceptances).set({ status: 'paid', lastError: null }).where(eqId(acceptance.id));
     await quoteRepo.updateQuoteAtVersion(tx, acceptance.quoteId, quote.version, { status: 'ordered' });
     await quoteRepo.insertEvent(tx, { quoteId: acceptance.quoteId, actorId: null, kind: 'ordered', message: `Deposit received; order ${number}.` });
-    await repo.addEvent(tx, order.id, null, 'deposit-paid', `Deposit received (${intent.id})`);
+    await repo.addEvent(tx, order.id, null, 'deposit-paid', 'Deposit received.', { paymentIntentId: intent.id });
     return { outcome: 'order-created' as const, orderId: order.id };
   });
   if (result.outcome === 'order-created') await notifyPaid(deps, result.orderId);

@@ -20,6 +20,7 @@ export const EVENT_WORDS: Record<string, string> = {
   declined: 'Declined',
   attachment: 'File attached',
   accepted: 'Offer accepted',
+  ordered: 'Deposit paid, order placed',
 };
 
 export const REVISION_WORDS: Record<QuoteDetail['revision']['kind'], string> = {
