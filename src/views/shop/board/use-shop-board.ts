@@ -37,7 +37,10 @@ export function useShopBoard() {
   const moving = ref<string | null>(null);
   const errors = reactive<Record<string, string>>({});
 
+  let ticket = 0;
+  /** Resolves once the lanes are in; the details (tubes, held-at step) follow without holding the board. */
   async function load(): Promise<void> {
+    const mine = ++ticket;
     loading.value = true;
     failure.value = null;
     try {
@@ -45,18 +48,22 @@ export function useShopBoard() {
         Promise.all(LANES.map((status) => fetchOrders({ status, sort: 'needBy', pageSize: 100 }))),
         fetchOrders({ status: 'shipped', sort: '-updated', pageSize: 20 }),
       ]);
+      if (mine !== ticket) return; // a newer load is on its way
       LANES.forEach((lane, i) => (lanes[lane] = lists[i]!.items));
       shipped.value = done.items;
       shippedTotal.value = done.total;
-      const ids = lists.flatMap((l) => l.items.map((o) => o.id));
-      const orders = await Promise.all(ids.map((id) => fetchOrder(id).catch(() => null)));
-      details.clear();
-      for (const o of orders) if (o) details.set(o.id, o);
+      void loadDetails(mine, lists.flatMap((l) => l.items.map((o) => o.id)));
     } catch (error) {
-      failure.value = errorMessage(error);
+      if (mine === ticket) failure.value = errorMessage(error);
     } finally {
-      loading.value = false;
+      if (mine === ticket) loading.value = false;
     }
+  }
+
+  async function loadDetails(mine: number, ids: string[]): Promise<void> {
+    const orders = await Promise.all(ids.map((id) => fetchOrder(id).catch(() => null)));
+    if (mine !== ticket) return;
+    for (const o of orders) if (o) details.set(o.id, o);
   }
 
   // Need-by order within each lane; orders without a date go last either way.
