@@ -11,7 +11,7 @@ import type { QuoteDeps } from '../server/features/quotes/deps';
 import { findSessionUser } from '../server/features/auth/repository';
 import { patchQuote } from '../server/features/quotes/edit';
 import { createQuote } from '../server/features/quotes/service';
-import { approve, decline, sendBack } from '../server/features/quotes/workflow';
+import { approve, assign, decline, sendBack } from '../server/features/quotes/workflow';
 import { localStorage } from '../server/lib/storage';
 import type { Db } from './index';
 import { quotes, users } from './schema';
@@ -51,7 +51,8 @@ export async function seedQuotes(db: Db): Promise<number> {
     const customer = await userByEmail(r.by);
     const input = createQuoteSchema.parse({ duty: r.duty, quantity: r.quantity, reference: r.reference, ...(r.needBy ? { needBy: r.needBy } : {}) });
     let q = await createQuote(deps, customer, input);
-    if (r.step === 'assigned' || r.step === 'edited') q = await patchQuote(deps, sales, q.id, { version: q.version, internalNote: 'Taking this one.' });
+    if (r.step === 'assigned') q = await assign(deps, sales, q.id, q.version);
+    if (r.step === 'edited') q = await patchQuote(deps, sales, q.id, { version: q.version, internalNote: 'Asked the customer about the coolant temperature in summer.' });
     if (r.step === 'edited') q = await patchQuote(deps, sales, q.id, { version: q.version, quantity: r.quantity + 1 });
     if (r.step === 'questions') q = await sendBack(deps, sales, q.id, { version: q.version, message: r.note! });
     if (r.step === 'approved') q = await approve(deps, sales, q.id, { version: q.version });

@@ -7,14 +7,17 @@ ensure_node_modules
 setup_database
 seed_db
 
+stop_bg smtp-sink
 start_bg smtp-sink node --import tsx server/fakes/smtp-sink/index.ts
 wait_port "$SMTP_SINK_PORT" 30 || die "the SMTP sink did not start (log: $DATA_DIR/logs/smtp-sink.log)"
+stop_bg stripe-fake
 start_bg stripe-fake node --import tsx server/fakes/stripe/index.ts
 wait_port "$STRIPE_FAKE_PORT" 30 || die "the Stripe fake did not start (log: $DATA_DIR/logs/stripe-fake.log)"
 
 log "building the client"
 npx vite build --logLevel warn
 
+stop_bg app   # a running app would keep serving the old code: start it afresh
 start_bg app node --import tsx server/index.ts
 if ! wait_http "$APP_URL/api/health" 60; then
   tail -n 30 "$DATA_DIR/logs/app.log" >&2 || true
