@@ -1,6 +1,7 @@
 import type { Page } from 'playwright-core';
 import { expect, test } from 'vitest';
 import { BASE_URL, DEMO_PASSWORD, demoUsers, openPage, otherCustomer, pathOf, phone, sel, signInAs, submitSignIn, useBrowser, visit } from './support/browser';
+import { apiAs } from './support/api';
 
 const browser = useBrowser();
 
@@ -14,19 +15,6 @@ const duty = {
   constraints: { maxTubeLength_m: 3, maxPressureDrop_Pa: 60_000, maxShellPressureDrop_Pa: 60_000 },
 };
 
-/** Signs in through the API with Node's fetch; returns a caller that keeps the session cookie. */
-async function apiAs(email: string) {
-  const headers = { 'Content-Type': 'application/json', 'X-Requested-With': 'bundlesmith', Origin: BASE_URL };
-  const login = await fetch(`${BASE_URL}/api/auth/login`, { method: 'POST', headers, body: JSON.stringify({ email, password: DEMO_PASSWORD }) });
-  expect(login.status, `sign-in of ${email}`).toBe(200);
-  const cookie = login.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
-  return async <T>(method: string, path: string, body?: unknown): Promise<T> => {
-    const res = await fetch(`${BASE_URL}/api${path}`, { method, headers: { ...headers, Cookie: cookie }, body: body === undefined ? undefined : JSON.stringify(body) });
-    const text = await res.text();
-    expect(res.ok, `${method} ${path}: ${res.status} ${text.slice(0, 300)}`).toBe(true);
-    return JSON.parse(text) as T;
-  };
-}
 
 type Created = { id: string; number: string; version: number };
 

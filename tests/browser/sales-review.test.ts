@@ -1,23 +1,11 @@
 import type { Page } from 'playwright-core';
 import { expect, test } from 'vitest';
-import { BASE_URL, DEMO_PASSWORD, demoUsers, openPage, pathOf, sel, signInAs, useBrowser, visit } from './support/browser';
+import { demoUsers, openPage, pathOf, sel, signInAs, useBrowser, visit } from './support/browser';
+import { api, apiSignIn } from './support/api';
 
 const browser = useBrowser();
-const HEADERS = { 'Content-Type': 'application/json', 'X-Requested-With': 'bundlesmith', Origin: BASE_URL };
 
-/** Signs in through the API with Node's fetch; returns the session cookie. */
-async function apiSignIn(email: string): Promise<string> {
-  const res = await fetch(`${BASE_URL}/api/auth/login`, { method: 'POST', headers: HEADERS, body: JSON.stringify({ email, password: DEMO_PASSWORD }) });
-  expect(res.status).toBe(200);
-  return res.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
-}
 
-async function api<T>(cookie: string, method: string, path: string, body?: unknown): Promise<T> {
-  const res = await fetch(`${BASE_URL}/api${path}`, { method, headers: { ...HEADERS, Cookie: cookie }, body: body === undefined ? undefined : JSON.stringify(body) });
-  const json = await res.json();
-  if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${JSON.stringify(json)}`);
-  return json as T;
-}
 
 /** An invented duty: a hydraulic-oil cooler on plant water. */
 async function customerRequest(reference: string): Promise<{ id: string; number: string }> {

@@ -8,25 +8,14 @@ import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { expect, test } from 'vitest';
-import { BASE_URL, DEMO_PASSWORD, demoUsers, openPage, pathOf, phone, sel, signInAs, useBrowser, visit } from './support/browser';
+import { demoUsers, openPage, pathOf, phone, sel, signInAs, useBrowser, visit } from './support/browser';
+import { api, apiSignIn } from './support/api';
 
 const browser = useBrowser();
-const HEADERS = { 'Content-Type': 'application/json', 'X-Requested-With': 'bundlesmith', Origin: BASE_URL };
 const STRIPE_API_URL = `http://127.0.0.1:${process.env.STRIPE_FAKE_PORT ?? '12111'}`;
 const SHOTS = join(process.cwd(), 'test-results');
 
-async function apiSignIn(email: string): Promise<string> {
-  const res = await fetch(`${BASE_URL}/api/auth/login`, { method: 'POST', headers: HEADERS, body: JSON.stringify({ email, password: DEMO_PASSWORD }) });
-  expect(res.status).toBe(200);
-  return res.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
-}
 
-async function api<T>(cookie: string, method: string, path: string, body?: unknown): Promise<T> {
-  const res = await fetch(`${BASE_URL}/api${path}`, { method, headers: { ...HEADERS, Cookie: cookie }, body: body === undefined ? undefined : JSON.stringify(body) });
-  const json = await res.json();
-  if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${JSON.stringify(json)}`);
-  return json as T;
-}
 
 /** An invented duty (a lube-oil cooler on plant water), approved by sales, accepted and paid by the buyer. */
 async function paidOrder(): Promise<{ orderId: string; number: string; tubeCount: number }> {
