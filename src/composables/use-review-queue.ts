@@ -2,10 +2,11 @@
  * The review queue's state: filters, sort and page live here and are sent to `GET /api/quotes`
  * (the server paginates, sorts and filters); a new filter goes back to page 1.
  */
-import { reactive, ref, watch } from 'vue';
+import { reactive } from 'vue';
 import type { ListQuotesQuery, QuoteStatus, QuoteSummary } from '@shared/schemas/quotes';
 import { errorMessage } from '../api/http';
 import { assignQuoteToMe, fetchQuotes } from '../api/quotes';
+import { usePagedList } from './use-paged-list';
 
 export type AssigneeFilter = 'all' | 'me' | 'none';
 
@@ -18,66 +19,28 @@ export function useReviewQueue() {
     page: 1,
     pageSize: 20,
   });
-  const items = ref<QuoteSummary[]>([]);
-  const total = ref(0);
-  const loading = ref(false);
-  const failure = ref<string | null>(null);
-  let ticket = 0;
-
-  async function load(): Promise<void> {
-    const mine = ++ticket;
-    loading.value = true;
-    failure.value = null;
-    try {
-      const list = await fetchQuotes({
-        status: filters.status ?? undefined,
-        assignee: filters.assignee === 'all' ? undefined : filters.assignee,
-        q: filters.q.trim() || undefined,
-        sort: filters.sort,
-        page: filters.page,
-        pageSize: filters.pageSize,
-      });
-      if (mine !== ticket) return; // an older answer arriving late
-      items.value = list.items;
-      total.value = list.total;
-    } catch (error) {
-      if (mine === ticket) failure.value = errorMessage(error);
-    } finally {
-      if (mine === ticket) loading.value = false;
-    }
-  }
-
-  // Typing in the search box waits for a pause; other filters reload at once.
-  let timer: ReturnType<typeof setTimeout> | undefined;
-  watch(
-    () => filters.q,
-    () => {
-      clearTimeout(timer);
-      timer = setTimeout(() => {
-        filters.page = 1;
-        void load();
-      }, 300);
-    },
+  const list = usePagedList(filters, (f) =>
+    fetchQuotes({
+      status: f.status ?? undefined,
+      assignee: f.assignee === 'all' ? undefined : f.assignee,
+      q: f.q.trim() || undefined,
+      sort: f.sort,
+      page: f.page,
+      pageSize: f.pageSize,
+    }),
   );
-  watch(
-    () => [filters.status, filters.assignee, filters.sort, filters.pageSize],
-    () => {
-      filters.page = 1;
-      void load();
-    },
-  );
-  watch(() => filters.page, () => void load());
 
   async function assign(row: QuoteSummary): Promise<void> {
     try {
       await assignQuoteToMe(row.id, row.version);
     } catch (error) {
-      failure.value = errorMessage(error);
+      list.failure.value = errorMessage(error);
+      return;
     }
-    await load();
+    await list.load();
   }
 
-  return { filters, items, total, loading, failure, load, assign };
+  return { filters, ...list, assign };
 }
 
 const HOUR = 3_600_000;
