@@ -6,26 +6,25 @@ import type { SessionUser } from '../../../shared/schemas/auth';
 import type { DesignEdit, Revision } from '../../../shared/schemas/quotes';
 import type { Design, SizeRequest } from '../../../shared/schemas/thermal';
 import { evaluateDesign } from '../../../shared/thermal/evaluate';
-import { costFromPriceBook } from '../pricing/cost';
 import { priceDesign } from '../pricing/price';
-import { getActivePriceBook } from '../pricing/repository';
+import { getActivePricing } from '../pricing/service';
 import { sizeCooler } from '../thermal/service';
 import type { QuoteDeps } from './deps';
 
-export type ActiveBook = Awaited<ReturnType<typeof getActivePriceBook>>;
+export type ActiveBook = Awaited<ReturnType<typeof getActivePricing>>;
 
 export async function activeBook(deps: QuoteDeps): Promise<ActiveBook> {
-  return getActivePriceBook(deps.db);
+  return getActivePricing(deps.db);
 }
 
 /** Sizes the duty ranked by the fabricator's own prices; the recommended design plus alternatives. */
 export function sizeWithBook(duty: SizeRequest, book: ActiveBook): { design: Design; alternatives: Design[] } {
-  const result = sizeCooler(duty, { costOf: costFromPriceBook(book.data), maxCandidates: 12 });
+  const result = sizeCooler(duty, { costOf: book.costOf, maxCandidates: 12 });
   return { design: result.recommended, alternatives: result.candidates.filter((c) => c !== result.recommended) };
 }
 
 export function evaluateWithBook(duty: SizeRequest, edit: DesignEdit, book: ActiveBook): Design {
-  return evaluateDesign(duty, edit, costFromPriceBook(book.data));
+  return evaluateDesign(duty, edit, book.costOf);
 }
 
 export function priceWithBook(
