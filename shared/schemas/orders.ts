@@ -84,6 +84,8 @@ export const orderSchema = z.object({
   number: z.string(),
   quoteId: z.uuid(),
   quoteNumber: z.string(),
+  /** the offer revision that was accepted and paid for */
+  revisionNumber: z.int(),
   organizationId: z.uuid(),
   organizationName: z.string(),
   status: orderStatusSchema,

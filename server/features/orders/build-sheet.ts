@@ -30,7 +30,8 @@ export const SHEET_CAUTIONS = [
 
 export async function buildSheet(deps: OrderDeps, viewer: SessionUser, orderId: string): Promise<BuildSheet> {
   const order = await getOrder(deps, viewer, orderId);
-  const revision = (await quoteRepo.findRevision(deps.db, order.quoteId, (await quoteRepo.findQuote(deps.db, order.quoteId))!.currentRevision))!;
+  // the revision the buyer accepted and paid for, whatever the quote did afterwards
+  const revision = (await quoteRepo.findRevision(deps.db, order.quoteId, order.revisionNumber))!;
   const book = await getPriceBookVersion(deps.db, revision.priceBookVersion);
   const d = order.design;
   const labels = tubeLabels(d);

@@ -24,6 +24,7 @@ export async function getOrder(deps: OrderDeps, viewer: SessionUser, id: string)
     number: row.number,
     quoteId: row.quoteId,
     quoteNumber: row.quoteNumber,
+    revisionNumber: row.revisionNumber,
     organizationId: row.organizationId,
     organizationName: row.organizationName,
     status: row.status,
