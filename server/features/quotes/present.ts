@@ -1,6 +1,8 @@
 /** Rows → the response shapes of shared/schemas/quotes.ts, with what each role may see. */
 import type { SessionUser } from '../../../shared/schemas/auth';
 import type { PriceLine } from '../../../shared/schemas/price-book';
+import { tubeMaterial } from '../../../shared/thermal/geometry/materials';
+import { tubeSizeOf } from '../../../shared/thermal/geometry/tubes';
 import type { QuoteDetail, QuoteSummary, Revision } from '../../../shared/schemas/quotes';
 import { isStaff } from '../../lib/auth/guards';
 import type * as repo from './repository';
@@ -114,22 +116,10 @@ export function toDetail(
   };
 }
 
-/** `212 × 3/4 in BWG 16 copper, 2.4 m, 2 passes, NPS 12 STD` */
+/** `212 × 3/4 in BWG 16 Copper (C12200), 2.40 m, 2 passes, NPS 12 STD`: the catalogue's own labels. */
 export function designSummary(d: Revision['design']): string {
-  const od = d.tubeOuterDiameter_m / 0.0254;
-  const odLabel = Math.abs(od * 8 - Math.round(od * 8)) < 0.01 ? `${fraction(od)} in` : `${Math.round(d.tubeOuterDiameter_m * 1000)} mm`;
+  const od = tubeSizeOf(d.tubeOuterDiameter_m)?.label ?? `${(d.tubeOuterDiameter_m * 1000).toFixed(1)} mm`;
+  const material = tubeMaterial(d.tubeMaterial)?.name ?? d.tubeMaterial;
   const passes = `${d.tubePasses} pass${d.tubePasses > 1 ? 'es' : ''}`;
-  return `${d.tubeCount} × ${odLabel} ${d.tubeWallLabel} ${d.tubeMaterial}, ${d.tubeLength_m.toFixed(2)} m, ${passes}${d.shellLabel ? `, ${d.shellLabel}` : ''}`;
-}
-
-function fraction(inches: number): string {
-  const eighths = Math.round(inches * 8);
-  const whole = Math.floor(eighths / 8);
-  let num = eighths % 8;
-  let den = 8;
-  while (num && num % 2 === 0) {
-    num /= 2;
-    den /= 2;
-  }
-  return [whole ? String(whole) : '', num ? `${num}/${den}` : ''].filter(Boolean).join(' ') || '0';
+  return `${d.tubeCount} × ${od} ${d.tubeWallLabel} ${material}, ${d.tubeLength_m.toFixed(2)} m, ${passes}${d.shellLabel ? `, ${d.shellLabel}` : ''}`;
 }
