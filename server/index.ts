@@ -15,9 +15,9 @@ try {
 
 const database = createDatabase(config.DATABASE_URL);
 const jobs = await startJobs(config.DATABASE_URL);
-await startMailWorker(jobs, createTransport(config.SMTP_URL), config.MAIL_FROM);
+await startMailWorker(jobs, database.db, createTransport(config.SMTP_URL), config.MAIL_FROM);
 
-const app = createApp({ config, database, mailer: queuedMailer(jobs) });
+const app = createApp({ config, database, mailer: queuedMailer(jobs, database.db) });
 const server = app.listen(config.PORT, config.HOST, () => {
   console.log(`[app] Bundlesmith listening on http://${config.HOST}:${config.PORT} (${config.APP_URL})`);
 });

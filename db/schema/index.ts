@@ -5,3 +5,4 @@ export * from './sessions';
 export * from './quotes';
 export * from './price-books';
 export * from './orders';
+export * from './mail';

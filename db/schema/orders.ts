@@ -50,6 +50,13 @@ export const orders = pgTable(
     totalMinor: bigint('total_minor', { mode: 'number' }).notNull(),
     depositMinor: bigint('deposit_minor', { mode: 'number' }).notNull(),
     refundedMinor: bigint('refunded_minor', { mode: 'number' }).notNull().default(0),
+    /**
+     * Decided by a cancellation in the same transaction as the status change; a job then asks the
+     * payment service for it (idempotency key per order), and the charge.refunded webhook completes it.
+     */
+    refundDueMinor: bigint('refund_due_minor', { mode: 'number' }).notNull().default(0),
+    refundStatus: text('refund_status', { enum: ['none', 'pending', 'requested', 'refunded', 'failed'] }).notNull().default('none'),
+    refundError: text('refund_error'),
     currency: text('currency').notNull(),
     hydrotestPressurePa: bigint('hydrotest_pressure_pa', { mode: 'number' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),

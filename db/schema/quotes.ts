@@ -31,6 +31,15 @@ export const quotes = pgTable(
     priceTotalMinor: bigint('price_total_minor', { mode: 'number' }).notNull(),
     currency: text('currency').notNull(),
     designSummary: text('design_summary').notNull(),
+    /**
+     * What the customer may see: the figures of the last revision meant for them (budget or offer),
+     * never a draft's. Updated only when such a revision is stored.
+     */
+    customerTotalMinor: bigint('customer_total_minor', { mode: 'number' }).notNull(),
+    customerQuantity: integer('customer_quantity').notNull(),
+    customerDesignSummary: text('customer_design_summary').notNull(),
+    /** the submitter's idempotency key: a retried submission returns the quote it already made */
+    clientKey: text('client_key'),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },
@@ -38,6 +47,7 @@ export const quotes = pgTable(
     index('quotes_status_updated_idx').on(t.status, t.updatedAt),
     index('quotes_org_updated_idx').on(t.organizationId, t.updatedAt),
     index('quotes_assignee_idx').on(t.assigneeId),
+    unique('quotes_submitter_client_key_uq').on(t.submittedBy, t.clientKey),
   ],
 );
 

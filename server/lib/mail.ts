@@ -1,6 +1,11 @@
+import { eq, sql } from 'drizzle-orm';
 import nodemailer, { type Transporter } from 'nodemailer';
+import type PgBoss from 'pg-boss';
+import type { Db } from '../../db';
+import { mailLog } from '../../db/schema';
 import type { Jobs } from './jobs';
 import { QUEUES } from './jobs';
+import { jobsDb, type Executor } from './sql-adapter';
 
 export interface MailMessage {
   to: string;
@@ -9,39 +14,87 @@ export interface MailMessage {
   html?: string;
 }
 
-/** Queues e-mail; the worker sends it through nodemailer with retries (see startMailWorker). */
+/**
+ * Queues e-mail. Pass the transaction of the change the message reports: the mail-log row and the
+ * queue job are written in it (a transactional outbox), so a crash or a rollback never leaves a
+ * change without its e-mail, nor an e-mail about a change that did not happen.
+ */
 export interface Mailer {
-  send(message: MailMessage): Promise<void>;
+  send(message: MailMessage, tx?: Executor): Promise<void>;
+}
+
+/** Retries with growing delays for about an hour (pg-boss: 5 s doubling, 10 retries). */
+const RETRY = { retryLimit: 10, retryDelay: 5, retryBackoff: true } as const;
+
+interface MailJob {
+  mailLogId: string;
 }
 
 export function createTransport(smtpUrl: string): Transporter {
   return nodemailer.createTransport(smtpUrl);
 }
 
-export function queuedMailer(jobs: Jobs): Mailer {
+export function queuedMailer(jobs: Jobs, db: Db): Mailer {
   return {
-    async send(message) {
-      // Retried with growing delays for about an hour; a job that still fails stays in
-      // pgboss.job with state 'failed', which admins can list.
-      await jobs.send(QUEUES.mail, message, { retryLimit: 10, retryDelay: 5, retryBackoff: true });
+    async send(message, tx) {
+      if (tx) return enqueue(jobs, tx, message);
+      await db.transaction((own) => enqueue(jobs, own, message));
     },
   };
 }
 
+async function enqueue(jobs: Jobs, tx: Executor, message: MailMessage, resendOf?: string) {
+  const [row] = await tx
+    .insert(mailLog)
+    .values({ to: message.to, subject: message.subject, text: message.text, html: message.html ?? null, resendOf: resendOf ?? null })
+    .returning({ id: mailLog.id });
+  await jobs.send(QUEUES.mail, { mailLogId: row!.id } satisfies MailJob, { ...RETRY, db: jobsDb(tx) });
+  return row!.id;
+}
+
+/** Queues a copy of a logged message (an admin's resend); the copy names the one it resends. */
+export async function resendMail(jobs: Jobs, db: Db, id: string): Promise<string | undefined> {
+  return db.transaction(async (tx) => {
+    const [old] = await tx.select().from(mailLog).where(eq(mailLog.id, id));
+    if (!old) return undefined;
+    return enqueue(jobs, tx, { to: old.to, subject: old.subject, text: old.text, ...(old.html ? { html: old.html } : {}) }, old.id);
+  });
+}
+
 /**
  * Sends queued mail: up to 20 messages per fetch, in parallel. A message that fails is failed on
- * its own (pg-boss retries it later); the others in the batch complete, so none is sent twice.
+ * its own (pg-boss retries it later) and its log row counts the attempt; the others in the batch
+ * complete, so none is sent twice. After the last retry the log row says `failed`.
  */
-export async function startMailWorker(jobs: Jobs, transport: Transporter, from: string): Promise<void> {
-  await jobs.work<MailMessage>(QUEUES.mail, { pollingIntervalSeconds: 0.5, batchSize: 20 }, async (batch) => {
-    await Promise.all(
-      batch.map(async (job) => {
-        try {
-          await transport.sendMail({ from, ...job.data });
-        } catch (err) {
-          await jobs.fail(QUEUES.mail, job.id, { message: (err as Error).message });
-        }
-      }),
-    );
+export async function startMailWorker(jobs: Jobs, db: Db, transport: Transporter, from: string): Promise<void> {
+  await jobs.work<MailJob>(QUEUES.mail, { pollingIntervalSeconds: 0.5, batchSize: 20, includeMetadata: true }, async (batch) => {
+    await Promise.all(batch.map((job) => sendOne(jobs, db, transport, from, job)));
   });
+}
+
+async function sendOne(jobs: Jobs, db: Db, transport: Transporter, from: string, job: PgBoss.JobWithMetadata<MailJob>) {
+  try {
+    const [row] = await db.select().from(mailLog).where(eq(mailLog.id, job.data.mailLogId));
+    if (!row) return; // nothing to send (the log row was removed)
+    if (row.status === 'sent') return; // already sent by an earlier delivery of this job
+    try {
+      await transport.sendMail({ from, to: row.to, subject: row.subject, text: row.text, ...(row.html ? { html: row.html } : {}) });
+    } catch (err) {
+      const last = job.retryCount >= job.retryLimit;
+      await db
+        .update(mailLog)
+        .set({ attempts: sql`${mailLog.attempts} + 1`, lastError: (err as Error).message.slice(0, 2000), status: last ? 'failed' : 'queued', updatedAt: sql`now()` })
+        .where(eq(mailLog.id, row.id));
+      await jobs.fail(QUEUES.mail, job.id, { message: (err as Error).message });
+      return;
+    }
+    await db
+      .update(mailLog)
+      .set({ attempts: sql`${mailLog.attempts} + 1`, status: 'sent', lastError: null, sentAt: sql`now()`, updatedAt: sql`now()` })
+      .where(eq(mailLog.id, row.id));
+  } catch (err) {
+    // the database went away mid-send: leave the job to pg-boss's expiry and retry
+    console.error(`[mail] job ${job.id}: ${(err as Error).message}`);
+    await jobs.fail(QUEUES.mail, job.id, { message: (err as Error).message }).catch(() => undefined);
+  }
 }

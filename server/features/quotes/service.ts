@@ -34,6 +34,9 @@ export async function createQuote(deps: QuoteDeps, customer: SessionUser, input:
       priceTotalMinor: price.total_minor,
       currency: price.currency,
       designSummary: designSummary(design),
+      customerTotalMinor: price.total_minor,
+      customerQuantity: input.quantity,
+      customerDesignSummary: designSummary(design),
     });
     await repo.insertRevision(tx, { quoteId, number: 1, kind: 'budget', data: revision, priceBookVersion: book.version, totalMinor: price.total_minor, createdBy: customer.id });
     await repo.insertEvent(tx, { quoteId, actorId: customer.id, kind: 'submitted', message: input.notes ?? null });

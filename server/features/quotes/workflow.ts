@@ -41,6 +41,10 @@ export async function approve(deps: QuoteDeps, user: SessionUser, id: string, in
       validUntil,
       assigneeId: row.assigneeId ?? user.id,
       priceTotalMinor: data.price.total_minor,
+      // the offer is what the customer sees from now on
+      customerTotalMinor: data.price.total_minor,
+      customerQuantity: data.price.quantity,
+      customerDesignSummary: row.designSummary,
     });
     if (!ok) throw stale();
     await repo.insertRevision(tx, { quoteId: id, number, kind: 'offer', data, priceBookVersion: current!.priceBookVersion, totalMinor: data.price.total_minor, createdBy: user.id });

@@ -27,8 +27,8 @@ export async function startTestApp(overrides: Record<string, string> = {}): Prom
   const database = createDatabase(config.DATABASE_URL, 5);
   let jobs: Jobs | undefined;
   jobs = await startJobs(config.DATABASE_URL);
-  await startMailWorker(jobs, createTransport(config.SMTP_URL), config.MAIL_FROM);
-  const app = createApp({ config, database, mailer: queuedMailer(jobs), clientDir: '/nonexistent' });
+  await startMailWorker(jobs, database.db, createTransport(config.SMTP_URL), config.MAIL_FROM);
+  const app = createApp({ config, database, mailer: queuedMailer(jobs, database.db), clientDir: '/nonexistent' });
   await database.pool.query('delete from rate_limit_hits');
   return {
     app,
