@@ -18,7 +18,8 @@ export function jobsDb(executor: Executor): PgBoss.Db {
       const chunks: SQL[] = [];
       parts.forEach((part, i) => {
         if (i % 2 === 0) chunks.push(sql.raw(part));
-        else chunks.push(sql`${values[Number(part) - 1]}`);
+        // an explicit parameter: a bare `${undefined}` would render as nothing in Drizzle's template
+        else chunks.push(sql`${sql.param(values[Number(part) - 1] ?? null)}`);
       });
       const result = await executor.execute(sql.join(chunks));
       return { rows: result.rows as unknown[] as never[] };
