@@ -3,6 +3,7 @@ import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import type pg from 'pg';
 import type { Config } from './config';
 import { HttpError } from './errors';
+import { FallbackRateLimitStore } from './rate-limit-fallback';
 import { PgRateLimitStore } from './rate-limit-store';
 
 
@@ -18,7 +19,8 @@ function limiter(
     legacyHeaders: false,
     skipSuccessfulRequests: opts.failuresOnly ?? false,
     keyGenerator: opts.key,
-    store: new PgRateLimitStore(pool, name),
+    // counted in PostgreSQL; in memory while the database is down (fail open, see rate-limit-fallback.ts)
+    store: new FallbackRateLimitStore(new PgRateLimitStore(pool, name)),
     handler: (_req, _res, next) => next(new HttpError(429, 'too-many-requests', opts.message)),
   });
 }
