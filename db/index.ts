@@ -10,7 +10,8 @@ export interface Database {
 }
 
 export function createDatabase(url: string, max = 10): Database {
-  const pool = new pg.Pool({ connectionString: url, max });
+  // a request waits at most 5 s for a connection: an unreachable database is an answer (503), not a hang
+  const pool = new pg.Pool({ connectionString: url, max, connectionTimeoutMillis: 5000 });
   pool.on('error', (err) => console.error('[db] idle client error', err.message));
   return { pool, db: drizzle(pool, { schema }) };
 }

@@ -148,8 +148,9 @@ stop_bg() {
   local pid; pid="$(cat "$pidfile")"
   if kill -0 "$pid" 2>/dev/null; then
     kill "$pid" 2>/dev/null || true
-    for _ in $(seq 1 50); do kill -0 "$pid" 2>/dev/null || break; sleep 0.1; done
-    kill -9 "$pid" 2>/dev/null || true
+    # up to 15 s: the app drains its requests and jobs (a supervised service stops its child first)
+    for _ in $(seq 1 150); do kill -0 "$pid" 2>/dev/null || break; sleep 0.1; done
+    if kill -0 "$pid" 2>/dev/null; then pkill -9 -P "$pid" 2>/dev/null || true; kill -9 "$pid" 2>/dev/null || true; fi
     log "$name stopped (pid $pid)"
   fi
   rm -f "$pidfile"

@@ -18,7 +18,7 @@ log "building the client"
 npx vite build --logLevel warn
 
 stop_bg app   # a running app would keep serving the old code: start it afresh
-start_bg app node --import tsx server/index.ts
+start_bg app bash docker-free-scripts/supervise.sh app node --import tsx server/index.ts
 if ! wait_http "$APP_URL/api/health" 60; then
   tail -n 30 "$DATA_DIR/logs/app.log" >&2 || true
   die "the app did not answer on $APP_URL (log: $DATA_DIR/logs/app.log)"

@@ -51,7 +51,7 @@ step "production build" npx vite build --logLevel warn
 browser_tests() {
   # the API tests' failed sign-ins must not throttle the browser's
   psql -h "$PGHOST" -p "$PGPORT" -U "$PGUSER" -d "$PGDATABASE" -qc "delete from rate_limit_hits" >/dev/null
-  start_bg app node --import tsx server/index.ts
+  start_bg app bash docker-free-scripts/supervise.sh app node --import tsx server/index.ts
   wait_http "$APP_URL/api/health" 60 || { tail -n 30 "$DATA_DIR/logs/app.log" >&2; return 1; }
   npx vitest run --project browser --reporter=default --reporter=json --outputFile.json="$REPORT_DIR/browser.json"
 }

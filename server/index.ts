@@ -5,6 +5,17 @@ import { loadConfig } from './lib/config';
 import { startJobs } from './lib/jobs';
 import { createTransport, queuedMailer, startMailWorker } from './lib/mail';
 
+// A failed promise nobody awaited (a job-queue call while PostgreSQL is down) is logged, and the app
+// keeps serving: requests answer 503 until the database is back. A thrown exception nobody caught
+// leaves the process in an unknown state: it exits, and the supervisor (start scripts) restarts it.
+process.on('unhandledRejection', (reason) => {
+  console.error('[app] unhandled rejection, kept running:', reason instanceof Error ? reason.message : reason);
+});
+process.on('uncaughtException', (err) => {
+  console.error('[app] uncaught exception, exiting for a restart:', err);
+  process.exit(1);
+});
+
 let config;
 try {
   config = loadConfig();

@@ -1,6 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
 import { ThermalInputError } from '../../shared/thermal/errors';
+import { DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable, rootMessage } from './outage';
 
 /** A failure with an HTTP status that handlers throw; the error middleware formats it. */
 export class HttpError extends Error {
@@ -61,6 +62,11 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
       code: err.type === 'entity.too.large' ? 'too-large' : 'malformed-body',
       message: err.type === 'entity.too.large' ? 'The request body is too large.' : 'The request body is not valid JSON.',
     };
+  } else if (isDatabaseUnavailable(err)) {
+    status = 503;
+    body = { code: 'unavailable', message: DATABASE_UNAVAILABLE_MESSAGE };
+    if (!res.headersSent) res.setHeader('Retry-After', '30');
+    console.error(`[error] ${req.method} ${req.originalUrl}: database unavailable (${rootMessage(err)})`);
   } else {
     console.error(`[error] ${req.method} ${req.originalUrl}`, err);
   }

@@ -23,8 +23,8 @@ export interface Mailer {
   send(message: MailMessage, tx?: Executor): Promise<void>;
 }
 
-/** Retries with growing delays for about an hour (pg-boss: 5 s doubling, 10 retries). */
-const RETRY = { retryLimit: 10, retryDelay: 5, retryBackoff: true } as const;
+/** Retries with growing delays for about an hour (pg-boss: 5 s doubling, 10 retries); a job left active by a crash or an outage comes back after 2 minutes. */
+const RETRY = { retryLimit: 10, retryDelay: 5, retryBackoff: true, expireInSeconds: 120 } as const;
 
 interface MailJob {
   mailLogId: string;
