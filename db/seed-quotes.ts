@@ -12,6 +12,7 @@ import { findSessionUser } from '../server/features/auth/repository';
 import { patchQuote } from '../server/features/quotes/edit';
 import { createQuote } from '../server/features/quotes/service';
 import { approve, assign, decline, sendBack } from '../server/features/quotes/workflow';
+import { discardMailer } from '../server/lib/mail';
 import { localStorage } from '../server/lib/storage';
 import type { Db } from './index';
 import { quotes, users } from './schema';
@@ -41,7 +42,7 @@ export async function seedQuotes(db: Db): Promise<number> {
   const missing = REQUESTS.filter((r) => !existing.has(r.reference));
   if (missing.length === 0) return 0;
   const config = loadConfig();
-  const deps: QuoteDeps = { db, config, mailer: { send: async () => undefined }, storage: localStorage('/nonexistent') };
+  const deps: QuoteDeps = { db, config, mailer: discardMailer, storage: localStorage('/nonexistent') };
   const userByEmail = async (email: string) => {
     const [row] = await db.select({ id: users.id }).from(users).where(eq(users.email, email));
     return (await findSessionUser(db, row!.id)) as SessionUser;

@@ -21,6 +21,8 @@ export interface MailMessage {
  */
 export interface Mailer {
   send(message: MailMessage, tx?: Executor): Promise<void>;
+  /** Queues a copy of a logged message (an admin's resend); undefined when there is no such message. */
+  resend(mailLogId: string): Promise<string | undefined>;
 }
 
 /** Retries with growing delays for about an hour (pg-boss: 5 s doubling, 10 retries); a job left active by a crash or an outage comes back after 2 minutes. */
@@ -40,6 +42,7 @@ export function queuedMailer(jobs: Jobs, db: Db): Mailer {
       if (tx) return enqueue(jobs, tx, message);
       await db.transaction((own) => enqueue(jobs, own, message));
     },
+    resend: (mailLogId) => resendMail(jobs, db, mailLogId),
   };
 }
 
@@ -98,3 +101,6 @@ async function sendOne(jobs: Jobs, db: Db, transport: Transporter, from: string,
     await jobs.fail(QUEUES.mail, job.id, { message: (err as Error).message }).catch(() => undefined);
   }
 }
+
+/** For the seed and benches: mail is dropped, not queued. */
+export const discardMailer: Mailer = { send: async () => undefined, resend: async () => undefined };

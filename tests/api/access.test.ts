@@ -2,6 +2,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createDatabase } from '../../db';
 import { createApp } from '../../server/app';
+import { discardMailer } from '../../server/lib/mail';
 import { signedIn, startTestApp, type TestApp } from './support/app';
 
 let t: TestApp;
@@ -77,7 +78,7 @@ describe('errors and health', () => {
   it('health says ok with the database up, 503 with it down', async () => {
     expect((await request(t.app).get('/api/health')).body).toEqual({ status: 'ok', db: 'ok' });
     const dead = createDatabase(t.config.DATABASE_URL.replace(/:(\d+)\//, ':1/'), 1);
-    const app = createApp({ config: t.config, database: dead, mailer: { send: async () => undefined }, clientDir: '/nonexistent' });
+    const app = createApp({ config: t.config, database: dead, mailer: discardMailer, clientDir: '/nonexistent' });
     const res = await request(app).get('/api/health');
     expect(res.status).toBe(503);
     expect(res.body).toEqual({ status: 'degraded', db: 'down' });

@@ -7,6 +7,7 @@ import type { AddressInfo } from 'node:net';
 import { createDatabase } from '../../db';
 import { createApp } from '../../server/app';
 import { loadConfig } from '../../server/lib/config';
+import { discardMailer } from '../../server/lib/mail';
 
 const duty = {
   process: { fluid: 'water', pressure_Pa: 300000, massFlow_kg_s: 1.5, inletTemp_C: 85, outletTemp_C: 40 },
@@ -19,7 +20,7 @@ const pct = (xs: number[], p: number) => [...xs].sort((a, b) => a - b)[Math.min(
 export async function run(rounds = 40): Promise<Record<string, number>> {
   const config = loadConfig({ ...process.env, NODE_ENV: 'test' });
   const database = createDatabase(config.DATABASE_URL, 4);
-  const app = createApp({ config, database, mailer: { send: async () => undefined }, clientDir: '/nonexistent' });
+  const app = createApp({ config, database, mailer: discardMailer, clientDir: '/nonexistent' });
   const server = app.listen(0, '127.0.0.1');
   await new Promise((resolve) => server.once('listening', resolve));
   const url = `http://127.0.0.1:${(server.address() as AddressInfo).port}/api/thermal/size`;
