@@ -77,29 +77,40 @@ export async function startMailWorker(jobs: Jobs, db: Db, transport: Transporter
 
 async function sendOne(jobs: Jobs, db: Db, transport: Transporter, from: string, job: PgBoss.JobWithMetadata<MailJob>) {
   try {
-    const [row] = await db.select().from(mailLog).where(eq(mailLog.id, job.data.mailLogId));
-    if (!row) return; // nothing to send (the log row was removed)
-    if (row.status === 'sent') return; // already sent by an earlier delivery of this job
-    try {
-      await transport.sendMail({ from, to: row.to, subject: row.subject, text: row.text, ...(row.html ? { html: row.html } : {}) });
-    } catch (err) {
-      const last = job.retryCount >= job.retryLimit;
-      await db
-        .update(mailLog)
-        .set({ attempts: sql`${mailLog.attempts} + 1`, lastError: (err as Error).message.slice(0, 2000), status: last ? 'failed' : 'queued', updatedAt: sql`now()` })
-        .where(eq(mailLog.id, row.id));
-      await jobs.fail(QUEUES.mail, job.id, { message: (err as Error).message });
-      return;
-    }
-    await db
-      .update(mailLog)
-      .set({ attempts: sql`${mailLog.attempts} + 1`, status: 'sent', lastError: null, sentAt: sql`now()`, updatedAt: sql`now()` })
-      .where(eq(mailLog.id, row.id));
+    const delivery = await deliverLogged(db, transport, from, job.data.mailLogId, job.retryCount >= job.retryLimit);
+    if (delivery.status === 'queued' || delivery.status === 'failed') await jobs.fail(QUEUES.mail, job.id, { message: delivery.error.message });
   } catch (err) {
     // the database went away mid-send: leave the job to pg-boss's expiry and retry
     console.error(`[mail] job ${job.id}: ${(err as Error).message}`);
     await jobs.fail(QUEUES.mail, job.id, { message: (err as Error).message }).catch(() => undefined);
   }
+}
+
+export type Delivery = { status: 'skipped' | 'sent' } | { status: 'queued' | 'failed'; error: Error };
+
+/**
+ * One delivery attempt of a logged message, as the mail worker makes it: the log row counts the
+ * attempt and keeps the error; `lastAttempt` (no retry follows) turns a failure into `failed`.
+ * Skipped when the row is gone or already sent (an earlier delivery of the same job).
+ */
+export async function deliverLogged(db: Db, transport: Transporter, from: string, mailLogId: string, lastAttempt: boolean): Promise<Delivery> {
+  const [row] = await db.select().from(mailLog).where(eq(mailLog.id, mailLogId));
+  if (!row || row.status === 'sent') return { status: 'skipped' };
+  try {
+    await transport.sendMail({ from, to: row.to, subject: row.subject, text: row.text, ...(row.html ? { html: row.html } : {}) });
+  } catch (err) {
+    const status = lastAttempt ? 'failed' : 'queued';
+    await db
+      .update(mailLog)
+      .set({ attempts: sql`${mailLog.attempts} + 1`, lastError: (err as Error).message.slice(0, 2000), status, updatedAt: sql`now()` })
+      .where(eq(mailLog.id, row.id));
+    return { status, error: err as Error };
+  }
+  await db
+    .update(mailLog)
+    .set({ attempts: sql`${mailLog.attempts} + 1`, status: 'sent', lastError: null, sentAt: sql`now()`, updatedAt: sql`now()` })
+    .where(eq(mailLog.id, row.id));
+  return { status: 'sent' };
 }
 
 /** For the seed and benches: mail is dropped, not queued. */
