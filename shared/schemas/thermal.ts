@@ -1,8 +1,10 @@
 /**
  * Request and result shapes of `POST /api/thermal/rate` and `POST /api/thermal/size` (issue 3).
- * All SI. These schemas reject malformed input (HTTP 400 naming the field); physically impossible
- * but well-formed input (zero or negative flows, a target past the coolant, water above boiling…)
- * passes here and is refused by the engine with a ThermalInputError (HTTP 422).
+ * All SI. These schemas reject malformed input (HTTP 400 naming the field), including numbers
+ * outside the physical range a cooler of this shop can have (issue 9: a 9.2e18 m shell once froze
+ * the tube-layout loop); lists are short and de-duplicated. Physically impossible but in-range input
+ * (zero or negative flows, a target past the coolant, water above boiling…) passes here and is
+ * refused by the engine with a ThermalInputError (HTTP 422).
  */
 import { z } from 'zod';
 import { correlationChoices } from '../thermal/correlations/select';
@@ -10,14 +12,83 @@ import { fluidIds } from '../thermal/fluids/registry';
 import { tubeMaterialIds } from '../thermal/geometry/materials';
 
 const num = z.number();
-const positive = z.number().positive();
-const nonNegative = z.number().nonnegative();
+
+/**
+ * A number inside [min, max]; the message names the quantity and the range in words, e.g.
+ * "Shell inner diameter must be between 0.05 and 2.5 m." (the error's path names the field).
+ */
+function within(what: string, min: number, max: number, unit: string, opts: { exclusiveMin?: boolean } = {}) {
+  const error = opts.exclusiveMin
+    ? `${what} must be above ${min} and at most ${max} ${unit}.`
+    : `${what} must be between ${min} and ${max} ${unit}.`;
+  const n = z.number({ error: `${what} must be a number (${unit}).` });
+  return (opts.exclusiveMin ? n.gt(min, { error }) : n.min(min, { error })).max(max, { error });
+}
+
+/**
+ * Physical ranges of the request's numbers. Wide enough for every cooler the engine can size (shells
+ * to 1.5 m in its catalogue, shared/thermal/geometry/shells.ts; fluids from −40 to 400 °C), narrow
+ * enough that no input makes the engine's loops or tables grow without end.
+ */
+export const LIMITS = {
+  /** absolute pressure, Pa: 0.01 to 300 bar */
+  pressure_Pa: [1e3, 3e7],
+  /** °C: below every fluid's range to above it; the fluid's own range is checked by the engine (422) */
+  temp_C: [-100, 600],
+  /** kg/s, magnitude (zero and negative flows reach the engine, which explains them with a 422) */
+  massFlow_kg_s: [-1000, 1000],
+  /** m: the catalogue's shells run 0.10 to 1.5 m; larger rolled shells to 2.5 m may be rated */
+  shellInnerDiameter_m: [0.05, 2.5],
+  /** m: the catalogue has 3/8 in (9.5 mm) to 1 1/4 in tubes; 5 to 100 mm accepted */
+  tubeOuterDiameter_m: [0.005, 0.1],
+  tubeWall_m: [0, 0.01],
+  /** m: a tube longer than 12 m is not drawn or shipped (common practice) */
+  tubeLength_m: [0, 12],
+  tubeCount: [1, 20_000],
+  tubePitch_m: [0.005, 0.2],
+  baffleSpacing_m: [0.02, 5],
+  nozzleDiameter_m: [0.005, 0.6],
+  roughness_m: [0, 1e-3],
+  /** m²K/W: TEMA's highest tabulated fouling resistances are about 0.002 (memory) */
+  fouling_m2K_W: [0, 0.01],
+  /** Pa: a pressure-drop limit up to 300 bar */
+  pressureDrop_Pa: [0, 3e7],
+  /** m: the shop's length increment */
+  lengthStep_m: [0.001, 1],
+  /** members of any list of choices in a sizing request */
+  listMax: 8,
+} as const;
+
+const L = LIMITS;
+const pressure = (what: string) => within(what, L.pressure_Pa[0], L.pressure_Pa[1], 'Pa (absolute)');
+const temperature = (what: string) => within(what, L.temp_C[0], L.temp_C[1], '°C');
+const massFlow = (what: string) => within(what, L.massFlow_kg_s[0], L.massFlow_kg_s[1], 'kg/s');
+const fouling = (what: string) => within(what, L.fouling_m2K_W[0], L.fouling_m2K_W[1], 'm²K/W');
+const pressureDrop = (what: string) => within(what, L.pressureDrop_Pa[0], L.pressureDrop_Pa[1], 'Pa', { exclusiveMin: true });
+const shellDiameter = (what: string) => within(what, L.shellInnerDiameter_m[0], L.shellInnerDiameter_m[1], 'm');
+const tubeDiameter = () => within('Tube outside diameter', L.tubeOuterDiameter_m[0], L.tubeOuterDiameter_m[1], 'm');
+const tubeLength = (what: string) => within(what, L.tubeLength_m[0], L.tubeLength_m[1], 'm', { exclusiveMin: true });
+const tubeCountMessage = `The tube count must be a whole number from ${L.tubeCount[0]} to ${L.tubeCount[1]}.`;
+
+/** A short list of choices: at most LIMITS.listMax members as sent, repeats dropped (first kept). */
+function choices<T extends z.ZodType>(item: T, what: string) {
+  return z
+    .array(item)
+    .min(1, { error: `Give at least one ${what}, or leave the list out.` })
+    .max(L.listMax, { error: `Give at most ${L.listMax} ${what}s.` })
+    .transform((xs) => [...new Set(xs)]);
+}
 
 export const fluidIdSchema = z.enum(fluidIds);
 
 /** A customer's own constant properties, SI. */
 export const constantFluidSchema = z.object({
-  constant: z.object({ density: positive, specificHeat: positive, viscosity: positive, conductivity: positive }),
+  constant: z.object({
+    density: within('Density', 0.01, 20_000, 'kg/m³'),
+    specificHeat: within('Specific heat', 100, 20_000, 'J/(kg K)'),
+    viscosity: within('Viscosity', 1e-6, 100, 'Pa s'),
+    conductivity: within('Thermal conductivity', 0.001, 500, 'W/(m K)'),
+  }),
 });
 
 export const fluidRefSchema = z.union([fluidIdSchema, constantFluidSchema]);
@@ -25,39 +96,39 @@ export type FluidRef = z.infer<typeof fluidRefSchema>;
 
 /** Intake air of a compressor (`air-moist`): sets the water the air carries. */
 export const intakeSchema = z.object({
-  temp_C: num,
+  temp_C: temperature('Intake temperature'),
   /** 0…1 */
-  relativeHumidity: z.number().min(0).max(1),
-  pressure_Pa: positive,
+  relativeHumidity: within('Relative humidity', 0, 1, '(a fraction)'),
+  pressure_Pa: pressure('Intake pressure'),
 });
 
 /** The stream inside the tubes. `pressure_Pa` absolute. */
 export const processStreamSchema = z.object({
   fluid: fluidRefSchema,
-  pressure_Pa: positive,
-  massFlow_kg_s: num,
-  inletTemp_C: num,
+  pressure_Pa: pressure('Process pressure'),
+  massFlow_kg_s: massFlow('Process mass flow'),
+  inletTemp_C: temperature('Process inlet temperature'),
   intake: intakeSchema.optional(),
 });
 
 export const layoutSchema = z.union([z.literal(30), z.literal(60), z.literal(90), z.literal(45)]);
 
-export const wallBoundarySchema = z.object({ kind: z.literal('wall'), wallTemp_C: num });
+export const wallBoundarySchema = z.object({ kind: z.literal('wall'), wallTemp_C: temperature('Wall temperature') });
 
 export const coolantBoundarySchema = z.object({
   kind: z.literal('coolant'),
   fluid: fluidRefSchema,
-  pressure_Pa: positive,
-  massFlow_kg_s: num,
-  inletTemp_C: num,
-  shellInnerDiameter_m: positive.optional(),
-  baffleSpacing_m: positive.optional(),
+  pressure_Pa: pressure('Coolant pressure'),
+  massFlow_kg_s: massFlow('Coolant mass flow'),
+  inletTemp_C: temperature('Coolant inlet temperature'),
+  shellInnerDiameter_m: shellDiameter('Shell inner diameter').optional(),
+  baffleSpacing_m: within('Baffle spacing', L.baffleSpacing_m[0], L.baffleSpacing_m[1], 'm').optional(),
   /** fraction of the shell diameter, 0.15–0.45 */
-  baffleCut: z.number().min(0.15).max(0.45).optional(),
-  tubePitch_m: positive.optional(),
+  baffleCut: within('Baffle cut', 0.15, 0.45, '(a fraction of the shell diameter)').optional(),
+  tubePitch_m: within('Tube pitch', L.tubePitch_m[0], L.tubePitch_m[1], 'm').optional(),
   layout: layoutSchema.optional(),
-  foulingInside_m2K_W: nonNegative.optional(),
-  foulingOutside_m2K_W: nonNegative.optional(),
+  foulingInside_m2K_W: fouling('Tube-side fouling resistance').optional(),
+  foulingOutside_m2K_W: fouling('Shell-side fouling resistance').optional(),
 });
 
 export const boundarySchema = z.discriminatedUnion('kind', [wallBoundarySchema, coolantBoundarySchema]);
@@ -70,15 +141,15 @@ const tubePasses = z
 
 export const geometrySchema = z
   .object({
-    tubeOuterDiameter_m: positive,
-    tubeWall_m: positive,
-    tubeCount: z.int().positive(),
-    tubeLength_m: positive,
+    tubeOuterDiameter_m: tubeDiameter(),
+    tubeWall_m: within('Tube wall', L.tubeWall_m[0], L.tubeWall_m[1], 'm', { exclusiveMin: true }),
+    tubeCount: z.int({ error: tubeCountMessage }).min(L.tubeCount[0], { error: tubeCountMessage }).max(L.tubeCount[1], { error: tubeCountMessage }),
+    tubeLength_m: tubeLength('Tube length'),
     tubePasses,
-    roughness_m: nonNegative.default(1.5e-6),
+    roughness_m: within('Roughness', L.roughness_m[0], L.roughness_m[1], 'm').default(1.5e-6),
     tubeMaterial: z.enum(tubeMaterialIds).default('carbon-steel'),
     /** optional tube-side nozzle bore, m: adds nozzle losses to the pressure drop */
-    nozzleDiameter_m: positive.optional(),
+    nozzleDiameter_m: within('Nozzle bore', L.nozzleDiameter_m[0], L.nozzleDiameter_m[1], 'm').optional(),
   })
   .refine((g) => g.tubeWall_m < g.tubeOuterDiameter_m / 2, { error: 'The tube wall must be thinner than half the outside diameter.', path: ['tubeWall_m'] })
   .refine((g) => g.tubeCount % g.tubePasses === 0, { error: 'The tube count must divide evenly among the tube passes.', path: ['tubeCount'] });
@@ -95,22 +166,22 @@ export type RateRequest = z.infer<typeof rateRequestSchema>;
 export type RateRequestInput = z.input<typeof rateRequestSchema>;
 
 export const sizeConstraintsSchema = z.object({
-  maxTubeLength_m: positive,
-  maxPressureDrop_Pa: positive,
-  maxShellPressureDrop_Pa: positive.optional(),
-  tubeOuterDiameters_m: z.array(positive).min(1).optional(),
-  materials: z.array(z.enum(tubeMaterialIds)).min(1).optional(),
-  tubePasses: z.array(tubePasses).min(1).optional(),
-  layouts: z.array(layoutSchema).min(1).optional(),
-  foulingInside_m2K_W: nonNegative.optional(),
-  foulingOutside_m2K_W: nonNegative.optional(),
-  maxShellInnerDiameter_m: positive.optional(),
+  maxTubeLength_m: tubeLength('Maximum tube length'),
+  maxPressureDrop_Pa: pressureDrop('Tube-side pressure-drop limit'),
+  maxShellPressureDrop_Pa: pressureDrop('Shell-side pressure-drop limit').optional(),
+  tubeOuterDiameters_m: choices(tubeDiameter(), 'tube outside diameter').optional(),
+  materials: choices(z.enum(tubeMaterialIds), 'material').optional(),
+  tubePasses: choices(tubePasses, 'pass count').optional(),
+  layouts: choices(layoutSchema, 'layout').optional(),
+  foulingInside_m2K_W: fouling('Tube-side fouling resistance').optional(),
+  foulingOutside_m2K_W: fouling('Shell-side fouling resistance').optional(),
+  maxShellInnerDiameter_m: shellDiameter('Maximum shell inner diameter').optional(),
   /** shop's length increment, m (default 0.1) */
-  lengthStep_m: positive.optional(),
+  lengthStep_m: within('Length step', L.lengthStep_m[0], L.lengthStep_m[1], 'm').optional(),
 });
 
 export const sizeRequestSchema = z.object({
-  process: processStreamSchema.extend({ outletTemp_C: num }),
+  process: processStreamSchema.extend({ outletTemp_C: temperature('Process outlet temperature') }),
   boundary: boundarySchema,
   constraints: sizeConstraintsSchema,
   correlation: correlationSchema,

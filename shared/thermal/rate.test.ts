@@ -33,7 +33,9 @@ describe('rating invariants (issue 3)', () => {
     for (const boundary of [wallReq.boundary, coolant]) {
       let last = Infinity;
       for (const length of [0.3, 1, 2, 4, 8, 16, 40, 200]) {
-        const r = rate({ ...wallReq, boundary, geometry: { ...geometry, tubeLength_m: length } });
+        // past the request's 12 m limit: the engine itself is asked (rateParsed), not the public schema
+        const parsed = rateRequestSchema.parse({ ...wallReq, boundary });
+        const r = rateParsed({ ...parsed, geometry: { ...parsed.geometry, tubeLength_m: length } });
         expect(r.outletTemp_C).toBeLessThanOrEqual(last + 1e-9);
         last = r.outletTemp_C;
       }
@@ -97,7 +99,7 @@ describe('impossible duties are explained, not computed', () => {
     expect(code(() => rate({ ...coolReq, boundary: { ...coolant, massFlow_kg_s: -1 } }))).toEqual(['flow-not-positive', 'boundary.massFlow_kg_s']);
     expect(code(() => rate({ ...wallReq, process: { ...processWater, inletTemp_C: 150 } }))?.[1]).toBe('process.fluid');
     expect(code(() => rate({ ...coolReq, boundary: { ...coolant, massFlow_kg_s: 0.05 } }))).toEqual(['fluid-range', 'boundary.fluid']);
-    expect(code(() => rate({ ...coolReq, boundary: { ...coolant, massFlow_kg_s: 1.5 }, geometry: { ...geometry, tubePasses: 2, tubeLength_m: 20 } }))).toEqual(['lmtd-correction-low', 'geometry.tubePasses']);
+    expect(code(() => rate({ ...coolReq, boundary: { ...coolant, massFlow_kg_s: 1.5 }, geometry: { ...geometry, tubePasses: 2, tubeLength_m: 12 } }))).toEqual(['lmtd-correction-low', 'geometry.tubePasses']);
     // JSON carries no NaN and zod refuses it (400); callers of the engine itself get a 422-style error
     const parsed = rateRequestSchema.parse(wallReq);
     expect(code(() => rateParsed({ ...parsed, boundary: { kind: 'wall', wallTemp_C: Number.NaN } }))).toEqual(['not-finite', 'boundary.wallTemp_C']);

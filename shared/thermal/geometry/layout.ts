@@ -1,8 +1,10 @@
 /**
  * Tube hole centres in a tubesheet: a lattice laid inside the outer tube limit (OTL), less the
  * pass-partition lanes and the tie rods. The shop's drilling pattern and the tube count both come
- * from here. Deterministic; results are cached per (shell, OD, pitch, layout, passes).
+ * from here. Deterministic; results are cached per (shell, OD, pitch, layout, passes) in a bounded
+ * LRU cache.
  */
+import { LRUCache } from 'lru-cache';
 import { bundleClearance, tieRodCount } from './shells';
 
 /** Tube layout angles (TEMA): 30° triangular, 60° rotated triangular, 90° square, 45° rotated square. */
@@ -111,17 +113,25 @@ function pickTieRods(x: number[], y: number[], count: number): Uint8Array {
   return tie;
 }
 
-/** shell ID → OD → pitch → layout·10 + passes: numeric keys, no string building on the hot path */
-const cache = new Map<number, Map<number, Map<number, Map<number, TubeLayout>>>>();
+/**
+ * Layouts already computed, least recently used dropped first. Bounded by count and by bytes (a
+ * 2.5 m shell of 3/8 in tubes is ~40,000 holes, 0.7 MB), so no stream of distinct requests grows
+ * the process without end (issue 9). 4,000 holds every layout of several full default searches.
+ */
+export const LAYOUT_CACHE_MAX = 4000;
+/** 128 MiB of hole arrays at most */
+export const LAYOUT_CACHE_MAX_BYTES = 128 * 1024 * 1024;
+const cache = new LRUCache<string, TubeLayout>({
+  max: LAYOUT_CACHE_MAX,
+  maxSize: LAYOUT_CACHE_MAX_BYTES,
+  sizeCalculation: (l) => l.x.byteLength + l.y.byteLength + l.tieRod.byteLength + l.region.byteLength + 64,
+});
 
-function cacheSlot(k: TubeLayoutKey): Map<number, TubeLayout> {
-  let a = cache.get(k.shellInnerDiameter_m);
-  if (!a) cache.set(k.shellInnerDiameter_m, (a = new Map()));
-  let b = a.get(k.tubeOuterDiameter_m);
-  if (!b) a.set(k.tubeOuterDiameter_m, (b = new Map()));
-  let c = b.get(k.tubePitch_m);
-  if (!c) b.set(k.tubePitch_m, (c = new Map()));
-  return c;
+const cacheKey = (k: TubeLayoutKey) => `${k.shellInnerDiameter_m}|${k.tubeOuterDiameter_m}|${k.tubePitch_m}|${k.layout}|${k.tubePasses}`;
+
+/** Layouts held in the cache now (for tests and diagnostics). */
+export function layoutCacheSize(): number {
+  return cache.size;
 }
 
 /**
@@ -129,9 +139,8 @@ function cacheSlot(k: TubeLayoutKey): Map<number, TubeLayout> {
  * tried and the one holding most holes kept (ties: the first), so the result is deterministic.
  */
 export function tubeLayout(k: TubeLayoutKey): TubeLayout {
-  const slot = cacheSlot(k);
-  const key = k.layout * 10 + k.tubePasses;
-  const hit = slot.get(key);
+  const key = cacheKey(k);
+  const hit = cache.get(key);
   if (hit) return hit;
   const [ax, ay, bx, by] = basis(k.layout, k.tubePitch_m);
   let best = layOut(k, 0, 0);
@@ -151,7 +160,7 @@ export function tubeLayout(k: TubeLayoutKey): TubeLayout {
     tubeCount: Math.max(0, best.x.length - ties),
     outerTubeLimit_m: otl,
   };
-  slot.set(key, result);
+  cache.set(key, result);
   return result;
 }
 
