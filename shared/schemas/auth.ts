@@ -4,6 +4,7 @@
  * so a rule changed here changes in both places.
  */
 import { z } from 'zod';
+import { plainText } from './text';
 
 export const roles = ['customer', 'sales', 'shop', 'admin'] as const;
 export const roleSchema = z.enum(roles);
@@ -34,15 +35,13 @@ export type LoginInput = z.infer<typeof loginSchema>;
 
 export const registerSchema = z
   .object({
-    name: z
-      .string({ error: 'Enter your name.' })
+    name: plainText({ error: 'Enter your name.' })
       .trim()
       .min(1, { error: 'Enter your name.' })
       .max(120, { error: 'Use at most 120 characters.' }),
     email,
     password: newPassword,
-    organizationName: z
-      .string()
+    organizationName: plainText()
       .trim()
       .min(2, { error: 'Use at least 2 characters.' })
       .max(120, { error: 'Use at most 120 characters.' })

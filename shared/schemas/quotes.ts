@@ -7,6 +7,7 @@ import { z } from 'zod';
 import { designSchema, layoutSchema, sizeRequestSchema } from './thermal';
 import { priceSchema } from './price-book';
 import { tubeMaterialIds } from '../thermal/geometry/materials';
+import { plainText } from './text';
 
 /**
  * in-review: awaiting engineering review (a budget offer is shown) · questions: sent back to the
@@ -22,9 +23,9 @@ export const createQuoteSchema = z.object({
   duty: sizeRequestSchema,
   quantity: z.int({ error: 'Enter a whole number of units.' }).min(1).max(500),
   needBy: isoDate.optional(),
-  notes: z.string().trim().max(4000).optional(),
+  notes: plainText().trim().max(4000).optional(),
   /** the customer's own tag, e.g. the compressor package it serves */
-  reference: z.string().trim().max(120).optional(),
+  reference: plainText().trim().max(120).optional(),
 });
 export type CreateQuoteInput = z.input<typeof createQuoteSchema>;
 
@@ -43,9 +44,9 @@ export const designEditSchema = z.object({
 export type DesignEdit = z.infer<typeof designEditSchema>;
 
 export const priceOverrideSchema = z.object({
-  key: z.string().min(1),
+  key: plainText().min(1),
   amount_minor: z.int(),
-  reason: z.string().trim().min(3, { error: 'Say why the computed price is overridden.' }).max(500),
+  reason: plainText().trim().min(3, { error: 'Say why the computed price is overridden.' }).max(500),
 });
 
 /** What a sales engineer may change; the same shape previews a change without saving it. */
@@ -62,20 +63,20 @@ export const previewChangeSchema = quoteChangeSchema.refine(notBoth, notBothMess
 export const patchQuoteSchema = quoteChangeSchema
   .extend({
     version: z.int().min(1),
-    internalNote: z.string().trim().min(1).max(4000).optional(),
+    internalNote: plainText().trim().min(1).max(4000).optional(),
   })
   .refine(notBoth, notBothMessage);
 export type PatchQuoteInput = z.input<typeof patchQuoteSchema>;
 
-export const approveQuoteSchema = z.object({ version: z.int().min(1), message: z.string().trim().max(4000).optional() });
+export const approveQuoteSchema = z.object({ version: z.int().min(1), message: plainText().trim().max(4000).optional() });
 export const reasonSchema = z.object({
   version: z.int().min(1).optional(),
-  message: z.string().trim().min(3, { error: 'Write a few words.' }).max(4000),
+  message: plainText().trim().min(3, { error: 'Write a few words.' }).max(4000),
 });
 
 export const listQuotesQuerySchema = z.object({
   status: quoteStatusSchema.optional(),
-  q: z.string().trim().max(100).optional(),
+  q: plainText().trim().max(100).optional(),
   assignee: z.union([z.literal('me'), z.literal('none'), z.uuid()]).optional(),
   page: z.coerce.number().int().min(1).default(1),
   pageSize: z.coerce.number().int().min(1).max(100).default(20),
