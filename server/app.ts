@@ -17,6 +17,7 @@ import { authRouter } from './features/auth/routes';
 import { verifyCredentials } from './features/auth/service';
 import { fluidsRouter } from './features/fluids/routes';
 import { healthRouter } from './features/health/routes';
+import { mailLogRouter } from './features/mail-log/routes';
 import { adminRouter, organizationsRouter } from './features/organizations/routes';
 import { acceptRouter, ordersRouter, webhookHandler } from './features/orders/routes';
 import { outboxRouter } from './features/outbox/routes';
@@ -85,6 +86,7 @@ export function createApp({
   app.use('/api/quotes', quotesRouter(orderDeps));
   app.use('/api/orders', ordersRouter(orderDeps));
   app.use('/api/admin/price-book', priceBookRouter(deps));
+  app.use('/api/admin/mail', mailLogRouter(deps));
   app.use('/api/admin', adminRouter(deps));
   app.use('/api/dev', outboxRouter(config.OUTBOX_URL));
   app.use('/api', notFoundHandler);
