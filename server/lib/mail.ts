@@ -39,8 +39,8 @@ export function createTransport(smtpUrl: string): Transporter {
 export function queuedMailer(jobs: Jobs, db: Db): Mailer {
   return {
     async send(message, tx) {
-      if (tx) return enqueue(jobs, tx, message);
-      await db.transaction((own) => enqueue(jobs, own, message));
+      if (tx) await enqueue(jobs, tx, message);
+      else await db.transaction((own) => enqueue(jobs, own, message));
     },
     resend: (mailLogId) => resendMail(jobs, db, mailLogId),
   };
