@@ -1,3 +1,4 @@
+import { availableParallelism } from 'node:os';
 import { z } from 'zod';
 
 /**
@@ -33,6 +34,10 @@ const envSchema = z.object({
   LOGIN_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
   PASSWORD_RESET_TTL_MINUTES: z.coerce.number().int().min(5).max(1440).default(60),
   INVITATION_TTL_DAYS: z.coerce.number().int().min(1).max(60).default(7),
+  /** worker threads that size and rate, off the request loop (default: 2, or 1 on a single core) */
+  THERMAL_WORKERS: z.coerce.number().int().min(1).max(64).default(Math.min(2, availableParallelism())),
+  /** the longest one sizing or rating may compute, ms; past it the worker is stopped and the client gets 503 */
+  THERMAL_TIME_BUDGET_MS: z.coerce.number().int().min(1).max(600_000).default(5000),
 });
 
 export type Config = z.infer<typeof envSchema> & { APP_URL: string };
