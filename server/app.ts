@@ -8,6 +8,7 @@ import { createPassport } from './lib/auth/passport';
 import type { Config } from './lib/config';
 import { csrfGuard } from './lib/csrf';
 import { errorHandler, notFoundHandler } from './lib/errors';
+import type { Jobs } from './lib/jobs';
 import type { Mailer } from './lib/mail';
 import { createStripe } from './lib/payments';
 import { localStorage, type FileStorage } from './lib/storage';
@@ -35,6 +36,8 @@ export interface AppDeps {
   storage?: FileStorage;
   /** the Stripe SDK; built from the configuration by default */
   stripe?: Stripe;
+  /** the job queue; a cancellation queues its refund on it (without it, a cancel with a refund fails) */
+  jobs?: Jobs;
 }
 
 const defaultClientDir = fileURLToPath(new URL('../dist', import.meta.url));
@@ -47,10 +50,11 @@ export function createApp({
   clientDir = defaultClientDir,
   storage = localStorage(join(resolve(config.DATA_DIR), 'uploads')),
   stripe = createStripe(config),
+  jobs,
 }: AppDeps) {
   const { db, pool } = database;
   const deps = { db, mailer, config };
-  const orderDeps = { ...deps, storage, stripe };
+  const orderDeps = { ...deps, storage, stripe, jobs };
   const passport = createPassport(db, (email, password) => verifyCredentials(deps, email, password));
 
   const app = express();

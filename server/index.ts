@@ -4,6 +4,8 @@ import { createApp } from './app';
 import { loadConfig } from './lib/config';
 import { startJobs } from './lib/jobs';
 import { createTransport, queuedMailer, startMailWorker } from './lib/mail';
+import { createStripe } from './lib/payments';
+import { startRefundWorker } from './features/orders/refunds';
 
 // A failed promise nobody awaited (a job-queue call while PostgreSQL is down) is logged, and the app
 // keeps serving: requests answer 503 until the database is back. A thrown exception nobody caught
@@ -27,8 +29,10 @@ try {
 const database = createDatabase(config.DATABASE_URL);
 const jobs = await startJobs(config.DATABASE_URL);
 await startMailWorker(jobs, database.db, createTransport(config.SMTP_URL), config.MAIL_FROM);
+const stripe = createStripe(config);
+await startRefundWorker(jobs, database.db, stripe);
 
-const app = createApp({ config, database, mailer: queuedMailer(jobs, database.db) });
+const app = createApp({ config, database, mailer: queuedMailer(jobs, database.db), stripe, jobs });
 const server = app.listen(config.PORT, config.HOST, () => {
   console.log(`[app] Bundlesmith listening on http://${config.HOST}:${config.PORT} (${config.APP_URL})`);
 });

@@ -6,7 +6,7 @@ import PgBoss from 'pg-boss';
  */
 export type Jobs = PgBoss;
 
-export const QUEUES = { mail: 'mail' } as const;
+export const QUEUES = { mail: 'mail', refund: 'refund' } as const;
 
 export async function startJobs(databaseUrl: string): Promise<PgBoss> {
   const boss = new PgBoss({ connectionString: databaseUrl, max: 4 });

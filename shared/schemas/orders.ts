@@ -61,7 +61,11 @@ export const advanceOrderSchema = z.object({
   hydrotestPassed: z.boolean().optional(),
 });
 
-export const cancelOrderSchema = z.object({ reason: text(2000) });
+export const cancelOrderSchema = z.object({
+  reason: text(2000),
+  /** the status the canceller saw: when the order has moved on since (a release), the cancel is refused with 409 */
+  from: orderStatusSchema.optional(),
+});
 
 export const listOrdersQuerySchema = z.object({
   status: orderStatusSchema.optional(),

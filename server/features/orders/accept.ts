@@ -1,12 +1,15 @@
 /**
  * The buyer accepts an approved, unexpired offer: PO number, billing contact, delivery address.
  * A PaymentIntent for the deposit is created (idempotency key per acceptance); the browser is sent
- * to pay. Only the verified webhook moves money state (webhook.ts).
+ * to pay. Only the verified webhook moves money state (webhook.ts). The payment service is asked
+ * before anything is stored: when it is down the buyer gets a 503 (nothing charged) and the quote
+ * stays approved, with no acceptance.
  */
 import type { SessionUser } from '../../../shared/schemas/auth';
 import { acceptQuoteSchema, type AcceptResult } from '../../../shared/schemas/orders';
 import { parse } from '../../lib/validate';
 import { HttpError } from '../../lib/errors';
+import { assertChargeable, depositMinor, paymentCall } from '../../lib/payments';
 import { getPriceBookVersion } from '../pricing/repository';
 import * as quoteRepo from '../quotes/repository';
 import { loadVisible } from '../quotes/service';
@@ -30,9 +33,10 @@ export async function acceptQuote(deps: OrderDeps, buyer: SessionUser, quoteId: 
   const revision = (await quoteRepo.findRevision(deps.db, quoteId, quote.currentRevision))!;
   const book = await getPriceBookVersion(deps.db, revision.priceBookVersion);
   const total = revision.data.price.total_minor;
-  const deposit = Math.round((total * book.deposit_pct) / 100);
+  const deposit = depositMinor(total, book.deposit_pct);
+  assertChargeable(deposit, revision.data.price.currency);
   const acceptanceId = crypto.randomUUID();
-  const intent = await deps.stripe.paymentIntents.create(
+  const intent = await paymentCall(() => deps.stripe.paymentIntents.create(
     {
       amount: deposit,
       currency: revision.data.price.currency.toLowerCase(),
@@ -41,7 +45,7 @@ export async function acceptQuote(deps: OrderDeps, buyer: SessionUser, quoteId: 
       metadata: { quoteId, quoteNumber: quote.number, revision: String(revision.number), acceptanceId },
     },
     { idempotencyKey: `accept-${acceptanceId}` },
-  );
+  ));
   await deps.db.transaction(async (tx) => {
     const ok = await quoteRepo.updateQuoteAtVersion(tx, quoteId, quote.version, { status: 'accepted' });
     if (!ok) throw new HttpError(409, 'stale-version', 'The offer changed while you accepted it; reload and try again.');
@@ -66,7 +70,7 @@ export async function acceptQuote(deps: OrderDeps, buyer: SessionUser, quoteId: 
 async function retryPayment(deps: OrderDeps, quoteId: string): Promise<AcceptResult> {
   const open = await repo.openAcceptance(deps.db, quoteId);
   if (!open) throw new HttpError(409, 'wrong-status', 'This offer is accepted and its deposit is being processed.');
-  const intent = await deps.stripe.paymentIntents.retrieve(open.paymentIntentId);
+  const intent = await paymentCall(() => deps.stripe.paymentIntents.retrieve(open.paymentIntentId));
   return paymentResult(deps, quoteId, intent.id, intent.client_secret ?? '', open.amountMinor, open.currency);
 }
 

@@ -1,6 +1,10 @@
-/** E-mail about orders: receipts, payment problems, steps the customer should know of, refunds. */
+/**
+ * E-mail about orders: receipts, payment problems, steps the customer should know of, refunds. Each
+ * takes the transaction of the change it reports: the message is queued with it or not at all.
+ */
 import { ORDER_STATUS_LABEL, type OrderStatus } from '../../../shared/schemas/orders';
 import { money } from '../quotes/notify';
+import type { Executor } from '../../lib/sql-adapter';
 import * as quoteRepo from '../quotes/repository';
 import type { OrderDeps } from './deps';
 import * as repo from './repository';
@@ -11,8 +15,8 @@ const orderLink = (deps: OrderDeps, id: string) => `${deps.config.APP_URL}/order
 /** Steps the customer hears of by e-mail (the others show on the timeline only). */
 export const CUSTOMER_STEPS: OrderStatus[] = ['released', 'hydrotest', 'ready-to-ship', 'shipped', 'on-hold', 'cancelled'];
 
-export async function notifyPaid(deps: OrderDeps, orderId: string) {
-  const o = (await repo.findOrder(deps.db, orderId))!;
+export async function notifyPaid(deps: OrderDeps, tx: Executor, orderId: string) {
+  const o = (await repo.findOrder(tx, orderId))!;
   const balance = o.totalMinor - o.depositMinor;
   await deps.mailer.send({
     to: o.buyerEmail,
@@ -21,43 +25,43 @@ export async function notifyPaid(deps: OrderDeps, orderId: string) {
       `Hello ${o.buyerName},\n\nWe received your deposit of ${money(o.depositMinor, o.currency)} for order ${o.number} ` +
       `(offer ${o.quoteNumber}, PO ${o.poNumber}).\nOrder total ${money(o.totalMinor, o.currency)}; balance due before shipment ` +
       `${money(balance, o.currency)}.\n\nFollow the order here: ${orderLink(deps, orderId)}${SIGNATURE}`,
-  });
-  for (const email of await quoteRepo.staffEmails(deps.db, 'sales')) {
+  }, tx);
+  for (const email of await quoteRepo.staffEmails(tx, 'sales')) {
     await deps.mailer.send({
       to: email,
       subject: `Deposit paid: order ${o.number} (${o.organizationName})`,
       text: `${o.organizationName} paid the deposit for ${o.quoteNumber}. Release order ${o.number} to the shop: ${orderLink(deps, orderId)}${SIGNATURE}`,
-    });
+    }, tx);
   }
 }
 
-export async function notifyPaymentFailed(deps: OrderDeps, intentId: string, reason: string) {
-  const acceptance = await repo.findAcceptanceByIntent(deps.db, intentId);
+export async function notifyPaymentFailed(deps: OrderDeps, tx: Executor, intentId: string, reason: string) {
+  const acceptance = await repo.findAcceptanceByIntent(tx, intentId);
   if (!acceptance) return;
-  const quote = await quoteRepo.findQuote(deps.db, acceptance.quoteId);
+  const quote = await quoteRepo.findQuote(tx, acceptance.quoteId);
   if (!quote) return;
   await deps.mailer.send({
     to: quote.submittedByEmail,
     subject: `Deposit for ${quote.number} not paid`,
     text: `The deposit payment for ${quote.number} did not go through: ${reason}\nYour acceptance stands; pay again from the offer page: ${deps.config.APP_URL}/quotes/${quote.id}${SIGNATURE}`,
-  });
+  }, tx);
 }
 
-export async function notifyStep(deps: OrderDeps, orderId: string, status: OrderStatus, note?: string | null) {
+export async function notifyStep(deps: OrderDeps, tx: Executor, orderId: string, status: OrderStatus, note?: string | null) {
   if (!CUSTOMER_STEPS.includes(status)) return;
-  const o = (await repo.findOrder(deps.db, orderId))!;
+  const o = (await repo.findOrder(tx, orderId))!;
   await deps.mailer.send({
     to: o.buyerEmail,
     subject: `Order ${o.number}: ${ORDER_STATUS_LABEL[status]}`,
     text: `Hello ${o.buyerName},\n\nYour order ${o.number} is now at: ${ORDER_STATUS_LABEL[status]}.${note ? `\n\n${note}` : ''}\n\n${orderLink(deps, orderId)}${SIGNATURE}`,
-  });
+  }, tx);
 }
 
-export async function notifyRefunded(deps: OrderDeps, orderId: string) {
-  const o = (await repo.findOrder(deps.db, orderId))!;
+export async function notifyRefunded(deps: OrderDeps, tx: Executor, orderId: string) {
+  const o = (await repo.findOrder(tx, orderId))!;
   await deps.mailer.send({
     to: o.buyerEmail,
     subject: `Refund for cancelled order ${o.number}`,
     text: `We refunded ${money(o.refundedMinor, o.currency)} of your deposit for order ${o.number}.${SIGNATURE}`,
-  });
+  }, tx);
 }

@@ -40,7 +40,8 @@ export function ordersRouter(deps: OrderDeps): Router {
     res.json(await advanceOrder(deps, currentUser(req), id(req), parse(advanceOrderSchema, req.body)));
   });
   r.post('/:id/cancel', requireUser, async (req, res) => {
-    res.json(await cancelOrder(deps, currentUser(req), id(req), parse(cancelOrderSchema, req.body).reason));
+    const { reason, from } = parse(cancelOrderSchema, req.body);
+    res.json(await cancelOrder(deps, currentUser(req), id(req), reason, from));
   });
   r.get('/:id/build-sheet', requireRole('sales', 'shop', 'admin'), async (req, res) => {
     res.json(await buildSheet(deps, currentUser(req), id(req)));

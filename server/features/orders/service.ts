@@ -4,10 +4,12 @@ import { orderSteps, type ListOrdersQuery, type Order, type OrderStatus } from '
 import type { advanceOrderSchema } from '../../../shared/schemas/orders';
 import { isStaff } from '../../lib/auth/guards';
 import { forbidden, HttpError, notFound } from '../../lib/errors';
+import type { Executor } from '../../lib/sql-adapter';
 import { getPriceBookVersion } from '../pricing/repository';
 import * as quoteRepo from '../quotes/repository';
 import type { OrderDeps } from './deps';
 import { notifyStep } from './notify';
+import { queueRefund } from './refunds';
 import * as repo from './repository';
 
 export async function loadOrder(deps: OrderDeps, viewer: SessionUser, id: string) {
@@ -56,11 +58,22 @@ export async function listOrders(deps: OrderDeps, viewer: SessionUser, query: Li
   };
 }
 
-async function move(deps: OrderDeps, user: SessionUser, id: string, from: OrderStatus, to: OrderStatus, note?: string | null, extra: Record<string, unknown> = {}) {
-  const ok = await repo.moveOrder(deps.db, id, from, { status: to, ...extra });
-  if (!ok) throw new HttpError(409, 'stale-status', 'The order moved on meanwhile; reload it.');
-  await repo.addEvent(deps.db, id, user.id, to, note ?? null);
-  await notifyStep(deps, id, to, note);
+/**
+ * Moves the order on in one transaction with its timeline event and its e-mail (and `then`, e.g. a
+ * refund job); the update is conditional on `from`, so of two concurrent moves exactly one wins and
+ * the other gets 409 with nothing written.
+ */
+async function move(
+  deps: OrderDeps, user: SessionUser, id: string, from: OrderStatus, to: OrderStatus, note?: string | null,
+  extra: Partial<typeof repo.orders.$inferInsert> = {}, then?: (tx: Executor) => Promise<void>,
+) {
+  await deps.db.transaction(async (tx) => {
+    const ok = await repo.moveOrder(tx, id, from, { status: to, ...extra });
+    if (!ok) throw new HttpError(409, 'stale-status', 'The order moved on meanwhile; reload it.');
+    await repo.addEvent(tx, id, user.id, to, note ?? null);
+    await notifyStep(deps, tx, id, to, note);
+    await then?.(tx);
+  });
   return getOrder(deps, user, id);
 }
 
@@ -109,11 +122,16 @@ const BEFORE_FABRICATION: OrderStatus[] = ['deposit-paid', 'released'];
 
 /**
  * Cancellation: before fabrication starts the buyer or sales may cancel (the deposit back, less the
- * price book's cancellation fee once released); after that only an admin. The refund goes through
- * Stripe and the `charge.refunded` webhook records it.
+ * price book's cancellation fee once released); after that only an admin. `from` is the status the
+ * canceller saw: when the order moved on meanwhile (a release in the same moment) the cancel gets 409.
+ *
+ * The status change, the refund due, its job and the e-mail commit together: a cancel that loses a
+ * race never reaches the payment service. The refund job (refunds.ts) asks Stripe for the refund
+ * with an idempotency key per order; the `charge.refunded` webhook records it.
  */
-export async function cancelOrder(deps: OrderDeps, user: SessionUser, id: string, reason: string) {
+export async function cancelOrder(deps: OrderDeps, user: SessionUser, id: string, reason: string, from?: OrderStatus) {
   const row = await loadOrder(deps, user, id);
+  if (from && from !== row.status) throw new HttpError(409, 'stale-status', `The order moved on meanwhile (it is ${row.status} now); reload it.`);
   if (row.status === 'cancelled' || row.status === 'shipped') throw new HttpError(409, 'wrong-status', `An order that is ${row.status} cannot be cancelled.`);
   const started = !BEFORE_FABRICATION.includes(row.status);
   if (user.role === 'shop' || (started && user.role !== 'admin')) throw forbidden('Fabrication has started: only an admin can cancel this order now.');
@@ -121,9 +139,11 @@ export async function cancelOrder(deps: OrderDeps, user: SessionUser, id: string
   const book = await getPriceBookVersion(deps.db, revision.priceBookVersion);
   const fee = row.status === 'deposit-paid' ? 0 : Math.min(row.depositMinor, Math.round((row.totalMinor * book.cancellationFee_pct) / 100));
   const refund = row.depositMinor - fee;
-  if (refund > 0) {
-    await deps.stripe.refunds.create({ payment_intent: row.paymentIntentId, amount: refund, metadata: { orderId: id } }, { idempotencyKey: `cancel-${id}` });
-  }
+  const jobs = deps.jobs;
+  if (refund > 0 && !jobs) throw new Error('cancelOrder: no job queue to request the refund from');
   const note = `Cancelled: ${reason} Refund ${refund} of ${row.depositMinor} (minor units)${fee ? `, cancellation fee ${fee}` : ''}.`;
-  return move(deps, user, id, row.status, 'cancelled', note, { heldFrom: null });
+  // decided from `row`; the move is conditional on row.status, so the decision holds when it commits
+  return move(deps, user, id, row.status, 'cancelled', note, { heldFrom: null, refundDueMinor: refund, refundStatus: refund > 0 ? 'pending' : 'none' }, async (tx) => {
+    if (refund > 0) await queueRefund(jobs!, tx, id);
+  });
 }

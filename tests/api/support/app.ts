@@ -9,6 +9,8 @@ import { createApp } from '../../../server/app';
 import { loadConfig, type Config } from '../../../server/lib/config';
 import { startJobs, type Jobs } from '../../../server/lib/jobs';
 import { createTransport, queuedMailer, startMailWorker } from '../../../server/lib/mail';
+import { createStripe } from '../../../server/lib/payments';
+import { startRefundWorker } from '../../../server/features/orders/refunds';
 
 export const DEMO_PASSWORD = 'Bundlesmith-demo-1';
 
@@ -28,7 +30,9 @@ export async function startTestApp(overrides: Record<string, string> = {}): Prom
   let jobs: Jobs | undefined;
   jobs = await startJobs(config.DATABASE_URL);
   await startMailWorker(jobs, database.db, createTransport(config.SMTP_URL), config.MAIL_FROM);
-  const app = createApp({ config, database, mailer: queuedMailer(jobs, database.db), clientDir: '/nonexistent' });
+  const stripe = createStripe(config);
+  await startRefundWorker(jobs, database.db, stripe);
+  const app = createApp({ config, database, mailer: queuedMailer(jobs, database.db), clientDir: '/nonexistent', stripe, jobs });
   await database.pool.query('delete from rate_limit_hits');
   return {
     app,
