@@ -84,7 +84,7 @@ export function createApp({
   app.use('/api/health', healthRouter(pool));
   app.use('/api/auth', authRouter(deps, pool, passport));
   app.use('/api/fluids', fluidsRouter());
-  app.use('/api/thermal', thermalRouter(pool));
+  app.use('/api/thermal', thermalRouter(pool, config));
   app.use('/api/organizations', organizationsRouter(deps));
   app.use('/api/quotes', acceptRouter(orderDeps));
   app.use('/api/quotes', quotesRouter(orderDeps));

@@ -6,7 +6,8 @@ import { unprocessable } from '../../lib/errors';
 /**
  * The server is the authority on thermal results: the same engine the client previews with, plus a
  * last guard that no non-finite number ever leaves in a result (the engine refuses impossible duties
- * itself; this catches a gap in it and says so instead of sending NaN).
+ * itself; this catches a gap in it and says so instead of sending NaN). These run inside the thermal
+ * worker threads (server/lib/thermal-worker.ts); request handlers call the pool, never these directly.
  */
 export function rateDesign(request: RateRequest): RateResult {
   return assertFinite(rateParsed(request), 'rating');
