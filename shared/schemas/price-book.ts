@@ -75,9 +75,36 @@ export const priceSchema = z.object({
 });
 export type Price = z.infer<typeof priceSchema>;
 
-/** `PUT /api/admin/price-book` (admin): saves `priceBook` as the next version; `note` says what changed. */
+/**
+ * `PUT /api/admin/price-book` (admin): saves `priceBook` as the next version. `baseVersion` is the
+ * version the edit started from: when another admin saved meanwhile the save is refused (409
+ * `stale-version`) instead of silently reverting their change. `note` says what changed.
+ */
 export const savePriceBookSchema = z.object({
   priceBook: priceBookSchema,
-  note: z.string().trim().min(1).max(500).optional(),
+  baseVersion: z.int({ error: 'must be the version the edit started from' }).min(1),
+  note: z
+    .string({ error: 'Say what changed.' })
+    .trim()
+    .min(1, { error: 'Say what changed.' })
+    .max(500, { error: 'Use at most 500 characters.' })
+    .refine((v) => !/[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/.test(v), { error: 'Remove control characters.' }),
 });
 export type SavePriceBook = z.infer<typeof savePriceBookSchema>;
+
+/** One saved version in the history (`GET /api/admin/price-book/versions`). */
+export interface PriceBookVersionSummary {
+  version: number;
+  note: string | null;
+  /** name of the admin who saved it; null for the seeded book */
+  createdBy: string | null;
+  createdAt: string;
+}
+
+/** One changed value between two versions; a missing side (added or removed row) is null. */
+export interface PriceBookChange {
+  /** dotted path into the book, e.g. `tubes.3.perMetre_minor` */
+  path: string;
+  before: unknown;
+  after: unknown;
+}

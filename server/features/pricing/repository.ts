@@ -1,6 +1,6 @@
-import { desc, eq, sql } from 'drizzle-orm';
+import { desc, eq, lt, sql } from 'drizzle-orm';
 import type { Db } from '../../../db';
-import { priceBooks } from '../../../db/schema';
+import { priceBooks, users } from '../../../db/schema';
 import type { PriceBook } from '../../../shared/schemas/price-book';
 import { HttpError } from '../../lib/errors';
 
@@ -29,6 +29,39 @@ export async function insertNextPriceBook(db: Db, data: PriceBook, createdBy: st
     .values({ version: sql`(select coalesce(max(${priceBooks.version}), 0) + 1 from ${priceBooks})`, data, createdBy, note: note ?? null })
     .returning(columns);
   return row!;
+}
+
+/** Inserts exactly `version`; a concurrent save of the same version loses on the unique key (23505). */
+export async function insertPriceBookVersion(db: Db, version: number, data: PriceBook, createdBy: string, note: string): Promise<StoredPriceBook> {
+  const [row] = await db.insert(priceBooks).values({ version, data, createdBy, note }).returning(columns);
+  return row!;
+}
+
+/** Saved versions, newest first, with the name of the admin who saved each. */
+export async function listPriceBookVersions(db: Db, limit: number) {
+  return db
+    .select({ version: priceBooks.version, note: priceBooks.note, createdBy: users.name, createdAt: priceBooks.createdAt })
+    .from(priceBooks)
+    .leftJoin(users, eq(users.id, priceBooks.createdBy))
+    .orderBy(desc(priceBooks.version))
+    .limit(limit);
+}
+
+/** The data of one version, or undefined. */
+export async function findPriceBookVersion(db: Db, version: number): Promise<PriceBook | undefined> {
+  const [row] = await db.select({ data: priceBooks.data }).from(priceBooks).where(eq(priceBooks.version, version));
+  return row?.data;
+}
+
+/** The highest version below `version` (the one it replaced), or undefined for the first. */
+export async function findPreviousVersion(db: Db, version: number): Promise<number | undefined> {
+  const [row] = await db
+    .select({ version: priceBooks.version })
+    .from(priceBooks)
+    .where(lt(priceBooks.version, version))
+    .orderBy(desc(priceBooks.version))
+    .limit(1);
+  return row?.version;
 }
 
 export interface ActivePriceBook {
