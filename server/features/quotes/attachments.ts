@@ -4,8 +4,7 @@ import { ALLOWED_DESCRIPTION, sniffUpload } from '../../lib/file-sniff';
 import type { QuoteDeps } from './deps';
 import * as repo from './repository';
 import { loadVisible } from './service';
-
-export const MAX_UPLOAD_BYTES = 20 * 1024 * 1024;
+import { cleanFilename } from './upload';
 
 /** Keeps a datasheet or drawing with the quote: type checked by content, stored under a random name. */
 export async function addAttachment(
@@ -16,7 +15,7 @@ export async function addAttachment(
 ) {
   await loadVisible(deps, user, quoteId);
   if (!file) throw new HttpError(400, 'invalid-input', 'Choose a file to attach (form field "file").', { file: 'required' });
-  const filename = file.originalname.replace(/[\\/\u0000-\u001f]/g, '_').slice(0, 200) || 'attachment';
+  const filename = cleanFilename(file.originalname);
   const contentType = await sniffUpload(file.buffer, filename);
   if (!contentType) {
     throw new HttpError(415, 'unsupported-file', `${filename} is not a ${ALLOWED_DESCRIPTION} file (checked by its content and its name).`, {
@@ -33,5 +32,6 @@ export async function readAttachment(deps: QuoteDeps, user: SessionUser, quoteId
   await loadVisible(deps, user, quoteId);
   const found = (await repo.listAttachments(deps.db, quoteId)).find((a) => a.id === attachmentId);
   if (!found) throw notFound('No such attachment on this quote.');
-  return { ...found, content: await deps.storage.get(found.storageKey) };
+  // cleaned again: names stored before the upload cleaned them may hold characters no header allows
+  return { ...found, filename: cleanFilename(found.filename), content: await deps.storage.get(found.storageKey) };
 }

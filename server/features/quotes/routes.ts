@@ -1,5 +1,4 @@
-import { Router, type RequestHandler } from 'express';
-import multer from 'multer';
+import { Router } from 'express';
 import { z } from 'zod';
 import {
   approveQuoteSchema,
@@ -10,13 +9,13 @@ import {
   reasonSchema,
 } from '../../../shared/schemas/quotes';
 import { currentUser, requireRole, requireUser } from '../../lib/auth/guards';
-import { HttpError } from '../../lib/errors';
 import { parse } from '../../lib/validate';
-import { addAttachment, MAX_UPLOAD_BYTES, readAttachment } from './attachments';
+import { addAttachment, readAttachment } from './attachments';
 import type { QuoteDeps } from './deps';
 import { patchQuote, previewChange } from './edit';
 import { offerPdf } from './offer';
 import { createQuote, getQuote, listQuotes } from './service';
+import { singleUpload } from './upload';
 import { approve, assign, decline, requestChange, sendBack } from './workflow';
 
 const idParams = z.object({ id: z.uuid({ error: 'must be a quote id (UUID)' }) });
@@ -24,19 +23,6 @@ const attachmentParams = idParams.extend({ attachmentId: z.uuid({ error: 'must b
 const versionBody = z.object({ version: z.int().min(1) });
 const revisionQuery = z.object({ revision: z.coerce.number().int().min(1).optional() });
 const pdfQuery = revisionQuery.extend({ units: z.enum(['SI', 'US']).default('SI') });
-
-/** One file per request, at most 20 MB, kept in memory until its content is checked. */
-function singleUpload(): RequestHandler {
-  const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: MAX_UPLOAD_BYTES, files: 1 } }).single('file');
-  return (req, res, next) =>
-    upload(req, res, (err: unknown) => {
-      if (err instanceof multer.MulterError) {
-        if (err.code === 'LIMIT_FILE_SIZE') return next(new HttpError(413, 'too-large', 'The file is larger than 20 MB.', { file: 'at most 20 MB' }));
-        return next(new HttpError(400, 'invalid-input', `Upload refused: ${err.message}.`, { [err.field ?? 'file']: err.message }));
-      }
-      next(err);
-    });
-}
 
 export function quotesRouter(deps: QuoteDeps): Router {
   const r = Router();
@@ -85,11 +71,8 @@ export function quotesRouter(deps: QuoteDeps): Router {
   r.get('/:id/attachments/:attachmentId', requireUser, async (req, res) => {
     const p = parse(attachmentParams, req.params, 'path');
     const file = await readAttachment(deps, currentUser(req), p.id, p.attachmentId);
-    res
-      .type(file.contentType)
-      .set('Content-Disposition', `attachment; filename="${file.filename.replace(/"/g, '')}"`)
-      .set('X-Content-Type-Options', 'nosniff')
-      .send(file.content);
+    // RFC 6266 with an ASCII fallback and the exact name as RFC 5987 `filename*=UTF-8''…` (content-disposition)
+    res.attachment(file.filename).type(file.contentType).set('X-Content-Type-Options', 'nosniff').send(file.content);
   });
   return r;
 }
