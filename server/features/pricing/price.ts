@@ -36,6 +36,33 @@ export interface PriceOptions {
   flangeClass?: FlangeClass;
 }
 
+/**
+ * Bounds of a price override (ours): within ±90 % of the computed line, so an override can neither
+ * zero a line nor flip its sign, and at most 10^10 minor units (100 million in the currency) a line,
+ * so a quote of 500 units of ~50 lines stays near 10^14, far inside the safe-integer range (9·10^15).
+ */
+export const OVERRIDE_BAND = 0.9;
+export const OVERRIDE_CAP_MINOR = 10_000_000_000;
+
+/** The override's allowed range for a computed line amount (integers, both ends included). */
+export function overrideRange(computedMinor: number): { min: number; max: number } {
+  const a = computedMinor * (1 - OVERRIDE_BAND);
+  const b = computedMinor * (1 + OVERRIDE_BAND);
+  return { min: Math.max(-OVERRIDE_CAP_MINOR, Math.ceil(Math.min(a, b))), max: Math.min(OVERRIDE_CAP_MINOR, Math.floor(Math.max(a, b))) };
+}
+
+function checkOverride(line: Omit<PriceLine, 'override'>, amountMinor: number) {
+  const { min, max } = overrideRange(line.amount_minor);
+  if (amountMinor >= min && amountMinor <= max) return;
+  const why =
+    line.amount_minor === 0
+      ? 'its computed amount is 0, so it cannot be overridden'
+      : Math.abs(amountMinor) > OVERRIDE_CAP_MINOR
+        ? `an override may be at most ${OVERRIDE_CAP_MINOR} minor units`
+        : `an override must stay within ±${OVERRIDE_BAND * 100} % of the computed ${line.amount_minor}: from ${min} to ${max}`;
+  throw new PricingError('override-out-of-range', `Price override of "${line.description}" (${line.key}) is ${amountMinor} minor units; ${why}.`);
+}
+
 const indexes = new WeakMap<PriceBook, BookIndex>();
 
 /** The book's index, built once per book object. */
@@ -69,6 +96,7 @@ export function priceDesign(design: BomInput, book: PriceBook, bookVersion: numb
   const add = (line: Omit<PriceLine, 'override'>): number => {
     const o = overrides.get(line.key);
     overrides.delete(line.key);
+    if (o) checkOverride(line, o.amount_minor);
     lines.push(o ? { ...line, amount_minor: o.amount_minor, override: { computed_minor: line.amount_minor, reason: o.reason, by: o.by } } : line);
     return lines[lines.length - 1]!.amount_minor;
   };

@@ -2,6 +2,8 @@
 import type { SessionUser } from '../../../shared/schemas/auth';
 import type { QuoteStatus } from '../../../shared/schemas/quotes';
 import { conflict, HttpError } from '../../lib/errors';
+import { assertChargeable, depositMinor } from '../../lib/payments';
+import { getPriceBookVersion } from '../pricing/repository';
 import type { QuoteDeps } from './deps';
 import { money, notifyCustomer, notifySales } from './notify';
 import { activeBook } from './pricing-port';
@@ -31,6 +33,9 @@ export async function approve(deps: QuoteDeps, user: SessionUser, id: string, in
   requireStatus(row.status, OPEN, 'approved');
   const current = await repo.findRevision(deps.db, id, row.currentRevision);
   const book = await activeBook(deps);
+  // the buyer must be able to pay the offer's deposit: at least the payment service's minimum charge
+  const { deposit_pct } = await getPriceBookVersion(deps.db, current!.priceBookVersion);
+  assertChargeable(depositMinor(current!.data.price.total_minor, deposit_pct), current!.data.price.currency);
   const validUntil = new Date(Date.now() + book.data.offerValidityDays * 86_400_000);
   const number = row.currentRevision + 1;
   await deps.db.transaction(async (tx) => {
