@@ -1,6 +1,7 @@
 /** A sales engineer's changes to a quote under review: duty, geometry, quantity, price overrides, notes. */
 import type { SessionUser } from '../../../shared/schemas/auth';
 import type { patchQuoteSchema, Revision } from '../../../shared/schemas/quotes';
+import type { Config } from '../../lib/config';
 import { conflict, HttpError } from '../../lib/errors';
 import type { QuoteDeps } from './deps';
 import { activeBook, buildRevision, evaluateWithBook, priceWithBook, sizeWithBook, type ActiveBook } from './pricing-port';
@@ -12,12 +13,12 @@ type Patch = ReturnType<typeof patchQuoteSchema.parse>;
 type Change = Omit<Patch, 'version' | 'internalNote'>;
 
 /** What the quote would become: design re-sized (new duty) or evaluated (new geometry), re-priced. */
-function computeChange(current: Revision, quantity: number, needBy: string | null, change: Change, book: ActiveBook, by: SessionUser) {
+async function computeChange(current: Revision, quantity: number, needBy: string | null, change: Change, book: ActiveBook, by: SessionUser, config: Config) {
   const duty = change.duty ?? current.duty;
   let design = current.design;
   let alternatives = current.alternatives as Revision['design'][];
-  if (change.duty) ({ design, alternatives } = sizeWithBook(duty, book));
-  else if (change.design) design = evaluateWithBook(duty, change.design, book);
+  if (change.duty) ({ design, alternatives } = await sizeWithBook(config, duty, book));
+  else if (change.design) design = await evaluateWithBook(config, duty, change.design, book);
   const qty = change.quantity ?? quantity;
   const base = priceWithBook(design, book, { quantity: qty, needBy });
   const keys = new Set(base.lines.map((l) => l.key));
@@ -47,7 +48,7 @@ export async function patchQuote(deps: QuoteDeps, user: SessionUser, id: string,
   const changed = Object.values(change).some((v) => v !== undefined);
   const current = (await repo.findRevision(deps.db, id, row.currentRevision))!;
   const book = await activeBook(deps);
-  const next = changed ? computeChange(current.data, row.quantity, row.needBy, change, book, user) : undefined;
+  const next = changed ? await computeChange(current.data, row.quantity, row.needBy, change, book, user, deps.config) : undefined;
 
   await deps.db.transaction(async (tx) => {
     if (!next) {
@@ -77,6 +78,6 @@ export async function patchQuote(deps: QuoteDeps, user: SessionUser, id: string,
 export async function previewChange(deps: QuoteDeps, user: SessionUser, id: string, change: Change) {
   const row = await loadVisible(deps, user, id);
   const current = (await repo.findRevision(deps.db, id, row.currentRevision))!;
-  const next = computeChange(current.data, row.quantity, row.needBy, change, await activeBook(deps), user);
+  const next = await computeChange(current.data, row.quantity, row.needBy, change, await activeBook(deps), user, deps.config);
   return { design: next.design, price: next.price, alternatives: next.alternatives.map(({ rating: _r, ...a }) => a) };
 }

@@ -5,10 +5,10 @@
 import type { SessionUser } from '../../../shared/schemas/auth';
 import type { DesignEdit, Revision } from '../../../shared/schemas/quotes';
 import type { Design, SizeRequest } from '../../../shared/schemas/thermal';
-import { evaluateDesign } from '../../../shared/thermal/evaluate';
 import { priceDesign } from '../pricing/price';
 import { getActivePricing } from '../pricing/service';
-import { sizeCooler } from '../thermal/service';
+import type { Config } from '../../lib/config';
+import { evaluateInPool, sizeInPool, type BookRef } from '../../lib/thermal-pool';
 import type { QuoteDeps } from './deps';
 
 export type ActiveBook = Awaited<ReturnType<typeof getActivePricing>>;
@@ -17,14 +17,23 @@ export async function activeBook(deps: QuoteDeps): Promise<ActiveBook> {
   return getActivePricing(deps.db);
 }
 
-/** Sizes the duty ranked by the fabricator's own prices; the recommended design plus alternatives. */
-export function sizeWithBook(duty: SizeRequest, book: ActiveBook): { design: Design; alternatives: Design[] } {
-  const result = sizeCooler(duty, { costOf: book.costOf, maxCandidates: 12 });
-  return { design: result.recommended, alternatives: result.candidates.filter((c) => c !== result.recommended) };
+/** The book as the thermal worker needs it: the worker rebuilds the cost function once per version. */
+const bookRef = (book: ActiveBook): BookRef => ({ version: book.version, createdAt: book.createdAt, data: book.data });
+
+/**
+ * Sizes the duty ranked by the fabricator's own prices, in the thermal worker pool (within
+ * THERMAL_TIME_BUDGET_MS); the recommended design plus alternatives.
+ */
+export async function sizeWithBook(config: Config, duty: SizeRequest, book: ActiveBook): Promise<{ design: Design; alternatives: Design[] }> {
+  const result = await sizeInPool(config, duty, { book: bookRef(book), maxCandidates: 12 });
+  // the candidates crossed a thread boundary: the recommended one is the first, not the same object
+  const [design, ...alternatives] = result.candidates;
+  return { design: design ?? result.recommended, alternatives };
 }
 
-export function evaluateWithBook(duty: SizeRequest, edit: DesignEdit, book: ActiveBook): Design {
-  return evaluateDesign(duty, edit, book.costOf);
+/** Rates a hand-set geometry for the duty, priced by the book's cost function, in the worker pool. */
+export function evaluateWithBook(config: Config, duty: SizeRequest, edit: DesignEdit, book: ActiveBook): Promise<Design> {
+  return evaluateInPool(config, duty, edit, bookRef(book));
 }
 
 export function priceWithBook(

@@ -15,7 +15,7 @@ import * as repo from './repository';
  */
 export async function createQuote(deps: QuoteDeps, customer: SessionUser, input: ReturnType<typeof createQuoteSchema.parse>) {
   const book = await activeBook(deps);
-  const { design, alternatives } = sizeWithBook(input.duty, book);
+  const { design, alternatives } = await sizeWithBook(deps.config, input.duty, book);
   const price = priceWithBook(design, book, { quantity: input.quantity, needBy: input.needBy });
   const id = await deps.db.transaction(async (tx) => {
     const number = await repo.nextQuoteNumber(tx);
