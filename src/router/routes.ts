@@ -135,6 +135,12 @@ export const routes: RouteRecordRaw[] = [
         meta: { title: 'Invitations', roles: ['admin'], nav: { label: 'Invitations', order: 80 } },
       },
       {
+        path: 'admin/mail',
+        name: 'admin-mail-log',
+        component: () => import('../views/admin/mail-log/index.vue'),
+        meta: { title: 'Mail log', roles: ['admin'], nav: { label: 'Mail log', order: 88 } },
+      },
+      {
         path: 'admin/outbox',
         name: 'admin-outbox',
         component: () => import('../views/admin/outbox/index.vue'),
