@@ -43,9 +43,19 @@ export const designEditSchema = z.object({
 });
 export type DesignEdit = z.infer<typeof designEditSchema>;
 
+/**
+ * The most a price override may be, in minor units (100 million in the currency): a quote of 500
+ * units of ~50 lines then stays near 10^14, far inside the safe-integer range. The server also keeps
+ * each override within ±90 % of its computed line (server/features/pricing/price.ts).
+ */
+export const OVERRIDE_CAP_MINOR = 10_000_000_000;
+
 export const priceOverrideSchema = z.object({
   key: plainText().min(1),
-  amount_minor: z.int(),
+  amount_minor: z
+    .int()
+    .min(-OVERRIDE_CAP_MINOR, { error: `At most ${OVERRIDE_CAP_MINOR} minor units either way.` })
+    .max(OVERRIDE_CAP_MINOR, { error: `At most ${OVERRIDE_CAP_MINOR} minor units either way.` }),
   reason: plainText().trim().min(3, { error: 'Say why the computed price is overridden.' }).max(500),
 });
 

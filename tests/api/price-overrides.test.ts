@@ -28,12 +28,21 @@ async function quoteWithLine() {
 const override = (key: string, amount_minor: number) => ({ priceOverrides: [{ key, amount_minor, reason: 'Negotiated with the mill' }] });
 
 describe('price overrides', () => {
-  it.each([
-    ['negative', -100],
-    ['zero', 0],
-    ['9e15', 9e15],
-  ])('refuses a %s line with 422 naming the line, and changes nothing', async (_label, amount) => {
+  it('refuses 9e15 with 400 naming the field', async () => {
     const q = await quoteWithLine();
+    const res = await sales.patch(`/api/quotes/${q.id}`).send({ version: q.version, ...override(q.line.key, 9e15) });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields).toHaveProperty(['priceOverrides.0.amount_minor']);
+    expect((await sales.get(`/api/quotes/${q.id}`).expect(200)).body.priceTotal_minor).toBe(q.total);
+  });
+
+  it.each([
+    ['negative', () => -100],
+    ['zero', () => 0],
+    ['100-times-computed', (c: number) => c * 100],
+  ])('refuses a %s line with 422 naming the line, and changes nothing', async (_label, amountOf) => {
+    const q = await quoteWithLine();
+    const amount = amountOf(q.line.amount_minor);
     const res = await sales.patch(`/api/quotes/${q.id}`).send({ version: q.version, ...override(q.line.key, amount) });
     expect(res.status).toBe(422);
     expect(res.body.error.code).toBe('override-out-of-range');

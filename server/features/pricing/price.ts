@@ -10,6 +10,7 @@
  * Line quantities (m, kg, m², h) are rounded to 0.01 first (bom.ts) and priced as shown.
  */
 import type { Price, PriceBook, PriceLine } from '../../../shared/schemas/price-book';
+import { OVERRIDE_CAP_MINOR } from '../../../shared/schemas/quotes';
 import { badRequest } from '../../lib/errors';
 import { billOfMaterials, type BomInput, type FlangeClass } from './bom';
 import { roundMinor } from './bom-rules';
@@ -42,7 +43,7 @@ export interface PriceOptions {
  * so a quote of 500 units of ~50 lines stays near 10^14, far inside the safe-integer range (9·10^15).
  */
 export const OVERRIDE_BAND = 0.9;
-export const OVERRIDE_CAP_MINOR = 10_000_000_000;
+export { OVERRIDE_CAP_MINOR };
 
 /** The override's allowed range for a computed line amount (integers, both ends included). */
 export function overrideRange(computedMinor: number): { min: number; max: number } {
