@@ -10,14 +10,15 @@ export const MAIL_STATUS_TAG: Record<MailStatus, 'default' | 'info' | 'success' 
 };
 
 // the error text as nodemailer words it: a Node network code, or the SMTP server's numbered reply
+// after a colon ("Message failed: 550 5.1.1 …"); digits elsewhere (an address's port) mean nothing
 const EXPLANATIONS: [RegExp, string][] = [
   [/ECONNREFUSED/, 'The mail server refused the connection: it may be down, or the address in SMTP_URL may be wrong.'],
   [/ENOTFOUND|EAI_AGAIN/, 'The mail server’s name could not be found: check the host in SMTP_URL.'],
-  [/ETIMEDOUT|timeout/i, 'The mail server did not answer in time.'],
+  [/ETIMEDOUT|timeout|Greeting never received/i, 'The mail server did not answer in time.'],
+  [/Invalid login|(^|: )53[45][ -]/, 'The mail server refused the application’s sign-in: check the user and password in SMTP_URL.'],
+  [/(^|: )5\d\d[ -]/, 'The mail server refused the message or its recipient address.'],
+  [/(^|: )4\d\d[ -]/, 'The mail server asked to try again later.'],
   [/ECONNRESET|closed/i, 'The connection to the mail server was cut off before the message was taken.'],
-  [/EAUTH|535|534/, 'The mail server refused the application’s sign-in: check the user and password in SMTP_URL.'],
-  [/\b55\d\b/, 'The mail server refused the message or its recipient address.'],
-  [/\b4\d\d\b/, 'The mail server asked to try again later.'],
 ];
 
 /** A sentence about a delivery error; null when there is none. */
