@@ -72,15 +72,21 @@ export async function requestPasswordReset(deps: AuthDeps, email: string): Promi
   if (!user) return;
   const { token, hash } = newToken();
   const ttl = deps.config.PASSWORD_RESET_TTL_MINUTES;
-  await repo.insertPasswordReset(deps.db, user.id, hash, ttl);
   const link = `${deps.config.APP_URL}/reset-password/confirm?token=${token}`;
-  await deps.mailer.send({
-    to: user.email,
-    subject: 'Reset your Bundlesmith password',
-    text:
-      `Hello ${user.name},\n\nSomeone (we hope you) asked to reset the password of your Bundlesmith account.\n` +
-      `Choose a new password here within ${ttl} minutes:\n\n${link}\n\n` +
-      `If you did not ask for this, ignore this message; your password stays as it is.\n\nAlder Creek Thermal Works`,
+  // the token and its e-mail commit together: no usable token without its message, nor the reverse
+  await deps.db.transaction(async (tx) => {
+    await repo.insertPasswordReset(tx, user.id, hash, ttl);
+    await deps.mailer.send(
+      {
+        to: user.email,
+        subject: 'Reset your Bundlesmith password',
+        text:
+          `Hello ${user.name},\n\nSomeone (we hope you) asked to reset the password of your Bundlesmith account.\n` +
+          `Choose a new password here within ${ttl} minutes:\n\n${link}\n\n` +
+          `If you did not ask for this, ignore this message; your password stays as it is.\n\nAlder Creek Thermal Works`,
+      },
+      tx,
+    );
   });
 }
 

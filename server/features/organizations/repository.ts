@@ -2,6 +2,7 @@ import { asc, eq } from 'drizzle-orm';
 import type { Db } from '../../../db';
 import { invitations, organizations, users } from '../../../db/schema';
 import type { Role } from '../../../shared/schemas/auth';
+import type { Executor } from '../../lib/sql-adapter';
 
 export async function listOrganizations(db: Db) {
   return db
@@ -41,7 +42,7 @@ export async function userExists(db: Db, email: string) {
 }
 
 export async function insertInvitation(
-  db: Db,
+  db: Executor,
   values: { email: string; role: Role; organizationId: string; tokenHash: string; invitedBy: string; expiresAt: Date },
 ) {
   const [row] = await db

@@ -45,21 +45,27 @@ export async function invite(deps: OrganizationDeps, admin: SessionUser, input: 
   }
   const { token, hash } = newToken();
   const expiresAt = new Date(Date.now() + deps.config.INVITATION_TTL_DAYS * 86_400_000);
-  const invitation = await repo.insertInvitation(deps.db, {
-    email: input.email,
-    role: input.role,
-    organizationId: organization.id,
-    tokenHash: hash,
-    invitedBy: admin.id,
-    expiresAt,
-  });
   const link = `${deps.config.APP_URL}/register?invite=${token}`;
-  await deps.mailer.send({
-    to: input.email,
-    subject: `${admin.name} invites you to Bundlesmith`,
-    text:
-      `Hello,\n\n${admin.name} of Alder Creek Thermal Works invites you to Bundlesmith as ${input.role} ` +
-      `of ${organization.name}.\nCreate your account here (the link works once, until ${expiresAt.toUTCString()}):\n\n${link}\n`,
+  // the invitation and its e-mail commit together
+  return deps.db.transaction(async (tx) => {
+    const invitation = await repo.insertInvitation(tx, {
+      email: input.email,
+      role: input.role,
+      organizationId: organization.id,
+      tokenHash: hash,
+      invitedBy: admin.id,
+      expiresAt,
+    });
+    await deps.mailer.send(
+      {
+        to: input.email,
+        subject: `${admin.name} invites you to Bundlesmith`,
+        text:
+          `Hello,\n\n${admin.name} of Alder Creek Thermal Works invites you to Bundlesmith as ${input.role} ` +
+          `of ${organization.name}.\nCreate your account here (the link works once, until ${expiresAt.toUTCString()}):\n\n${link}\n`,
+      },
+      tx,
+    );
+    return invitation;
   });
-  return invitation;
 }

@@ -1,5 +1,9 @@
-/** E-mail for every state change that concerns someone, queued (never blocks the request). */
-import type { QuoteDetail } from '../../../shared/schemas/quotes';
+/**
+ * E-mail for every state change that concerns someone. Each helper takes the transaction of the
+ * change it reports: the message is queued in it (transactional outbox), so the change and its
+ * e-mail commit together or not at all, and the request never waits for the SMTP server.
+ */
+import type { Executor } from '../../lib/sql-adapter';
 import type { QuoteDeps } from './deps';
 import * as repo from './repository';
 
@@ -9,35 +13,51 @@ const money = (minor: number, currency: string) =>
 const link = (deps: QuoteDeps, id: string) => `${deps.config.APP_URL}/quotes/${id}`;
 const SIGNATURE = '\n\nAlder Creek Thermal Works · Bundlesmith';
 
-async function customerAddress(deps: QuoteDeps, quoteId: string) {
-  const row = await repo.findQuote(deps.db, quoteId);
-  return row ? { email: row.submittedByEmail, name: row.submittedByName } : undefined;
+/** What sales hear of a new request: the figures as stored, taken from the request itself. */
+export interface SubmittedQuote {
+  id: string;
+  number: string;
+  organizationName: string;
+  submittedByName: string;
+  reference: string | null;
+  designSummary: string;
+  priceTotal_minor: number;
+  currency: string;
+  quantity: number;
 }
 
-export async function notifySubmitted(deps: QuoteDeps, q: QuoteDetail) {
-  const to = await repo.staffEmails(deps.db, 'sales');
+export async function notifySubmitted(deps: QuoteDeps, tx: Executor, q: SubmittedQuote) {
+  const to = await repo.staffEmails(tx, 'sales');
   for (const email of to) {
-    await deps.mailer.send({
-      to: email,
-      subject: `New request ${q.number} from ${q.organizationName}`,
-      text:
-        `${q.submittedBy.name} of ${q.organizationName} asks for a cooler: ${q.designSummary} was sized, ` +
-        `budget ${money(q.priceTotal_minor, q.currency)} for ${q.quantity} unit(s).\n` +
-        `Review it within the response target: ${link(deps, q.id)}${SIGNATURE}`,
-    });
+    await deps.mailer.send(
+      {
+        to: email,
+        subject: `New request ${q.number} from ${q.organizationName}`,
+        text:
+          `${q.submittedByName} of ${q.organizationName} asks for a cooler${q.reference ? ` (their reference: ${q.reference})` : ''}: ` +
+          `${q.designSummary} was sized, budget ${money(q.priceTotal_minor, q.currency)} for ${q.quantity} unit(s).\n` +
+          `Review it within the response target: ${link(deps, q.id)}${SIGNATURE}`,
+      },
+      tx,
+    );
   }
 }
 
-export async function notifyCustomer(deps: QuoteDeps, quoteId: string, subject: string, body: string) {
-  const to = await customerAddress(deps, quoteId);
-  if (!to) return;
-  await deps.mailer.send({ to: to.email, subject, text: `Hello ${to.name},\n\n${body}\n\n${link(deps, quoteId)}${SIGNATURE}` });
+/** To the quote's submitter. */
+export async function notifyCustomer(deps: QuoteDeps, tx: Executor, quoteId: string, subject: string, body: string) {
+  const row = await repo.findQuote(tx, quoteId);
+  if (!row) return;
+  await deps.mailer.send(
+    { to: row.submittedByEmail, subject, text: `Hello ${row.submittedByName},\n\n${body}\n\n${link(deps, quoteId)}${SIGNATURE}` },
+    tx,
+  );
 }
 
-export async function notifySales(deps: QuoteDeps, quoteId: string, assigneeEmail: string | undefined, subject: string, body: string) {
-  const to = assigneeEmail ? [assigneeEmail] : await repo.staffEmails(deps.db, 'sales');
+/** To the assignee, or to every sales engineer while nobody has taken the quote. */
+export async function notifySales(deps: QuoteDeps, tx: Executor, quoteId: string, assigneeEmail: string | undefined, subject: string, body: string) {
+  const to = assigneeEmail ? [assigneeEmail] : await repo.staffEmails(tx, 'sales');
   for (const email of to) {
-    await deps.mailer.send({ to: email, subject, text: `${body}\n\n${link(deps, quoteId)}${SIGNATURE}` });
+    await deps.mailer.send({ to: email, subject, text: `${body}\n\n${link(deps, quoteId)}${SIGNATURE}` }, tx);
   }
 }
 

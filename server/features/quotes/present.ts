@@ -15,7 +15,12 @@ export const BUDGET_SPREAD = 0.1;
 type Row = NonNullable<Awaited<ReturnType<typeof repo.findQuote>>>;
 const iso = (d: Date | string | null) => (d === null ? null : new Date(d).toISOString());
 
-export function toSummary(row: Row): QuoteSummary {
+/**
+ * Staff see the quote as it stands; a customer sees the total, quantity and design of the last
+ * revision meant for them, not those of a draft a sales engineer has not sent yet.
+ */
+export function toSummary(viewer: SessionUser, row: Row): QuoteSummary {
+  const staff = isStaff(viewer);
   const created = new Date(row.createdAt);
   const expired = row.status === 'approved' && row.validUntil !== null && new Date(row.validUntil) < new Date();
   return {
@@ -26,18 +31,18 @@ export function toSummary(row: Row): QuoteSummary {
     organizationId: row.organizationId,
     organizationName: row.organizationName,
     reference: row.reference,
-    quantity: row.quantity,
+    quantity: staff ? row.quantity : row.customerQuantity,
     needBy: row.needBy,
     validUntil: iso(row.validUntil),
     expired,
-    priceTotal_minor: row.priceTotal_minor,
+    priceTotal_minor: staff ? row.priceTotal_minor : row.customerTotal_minor,
     currency: row.currency,
     submittedBy: { id: row.submittedById, name: row.submittedByName },
     assignee: row.assigneeId ? { id: row.assigneeId, name: row.assigneeName! } : null,
     createdAt: created.toISOString(),
     updatedAt: new Date(row.updatedAt).toISOString(),
     responseDueAt: new Date(created.getTime() + RESPONSE_TARGET_HOURS * 3_600_000).toISOString(),
-    designSummary: row.designSummary,
+    designSummary: staff ? row.designSummary : row.customerDesignSummary,
   };
 }
 
@@ -75,7 +80,7 @@ export function toDetail(
   },
 ): QuoteDetail {
   const staff = isStaff(viewer);
-  const summary = toSummary(row);
+  const summary = toSummary(viewer, row);
   const sales = viewer.role === 'sales' || viewer.role === 'admin';
   const open = row.status === 'in-review' || row.status === 'questions';
   const shown = staff ? revision : { ...revision, price: customerPrice(revision.price) };
@@ -89,8 +94,8 @@ export function toDetail(
     budgetRange:
       row.status === 'in-review' && revision.kind !== 'offer'
         ? {
-            low_minor: Math.round(row.priceTotal_minor * (1 - BUDGET_SPREAD)),
-            high_minor: Math.round(row.priceTotal_minor * (1 + BUDGET_SPREAD)),
+            low_minor: Math.round(summary.priceTotal_minor * (1 - BUDGET_SPREAD)),
+            high_minor: Math.round(summary.priceTotal_minor * (1 + BUDGET_SPREAD)),
           }
         : null,
     attachments: parts.attachments.map(({ storageKey: _k, ...a }) => ({ ...a, createdAt: new Date(a.createdAt).toISOString() })),

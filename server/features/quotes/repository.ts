@@ -32,6 +32,10 @@ const summaryColumns = {
   createdAt: quotes.createdAt,
   updatedAt: quotes.updatedAt,
   designSummary: quotes.designSummary,
+  // what the customer may see: the figures of the last revision meant for them (never a draft's)
+  customerTotal_minor: quotes.customerTotalMinor,
+  customerQuantity: quotes.customerQuantity,
+  customerDesignSummary: quotes.customerDesignSummary,
   currentRevision: quotes.currentRevision,
   notes: quotes.notes,
   duty: quotes.duty,
@@ -51,20 +55,23 @@ export async function findQuote(db: Executor, id: string) {
   return row;
 }
 
-const SORTS: Record<string, SQL> = {
+/** Sort orders; `value` sorts customers by the total they were shown, staff by the current one. */
+const sorts = (customerView: boolean): Record<string, SQL> => ({
   created: asc(quotes.createdAt),
   '-created': desc(quotes.createdAt),
   updated: asc(quotes.updatedAt),
   '-updated': desc(quotes.updatedAt),
-  value: asc(quotes.priceTotalMinor),
-  '-value': desc(quotes.priceTotalMinor),
+  value: asc(customerView ? quotes.customerTotalMinor : quotes.priceTotalMinor),
+  '-value': desc(customerView ? quotes.customerTotalMinor : quotes.priceTotalMinor),
   needBy: sql`${quotes.needBy} asc nulls last`,
   '-needBy': sql`${quotes.needBy} desc nulls last`,
   number: asc(quotes.number),
   '-number': desc(quotes.number),
-};
+});
 
+/** A scope with an organisation is a customer's: it filters, sorts and searches by the customer's figures. */
 export async function listQuotes(db: Db, query: ListQuotesQuery, scope: { organizationId?: string; userId: string }) {
+  const customerView = scope.organizationId !== undefined;
   const where: SQL[] = [];
   if (scope.organizationId) where.push(eq(quotes.organizationId, scope.organizationId));
   if (query.status) where.push(eq(quotes.status, query.status));
@@ -73,13 +80,14 @@ export async function listQuotes(db: Db, query: ListQuotesQuery, scope: { organi
   else if (query.assignee) where.push(eq(quotes.assigneeId, query.assignee));
   if (query.q) {
     const like = `%${query.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-    where.push(or(ilike(quotes.number, like), ilike(organizations.name, like), ilike(quotes.reference, like), ilike(quotes.designSummary, like))!);
+    const summary = customerView ? quotes.customerDesignSummary : quotes.designSummary;
+    where.push(or(ilike(quotes.number, like), ilike(organizations.name, like), ilike(quotes.reference, like), ilike(summary, like))!);
   }
   const condition = where.length ? and(...where) : undefined;
   const [items, [total]] = await Promise.all([
     baseSelect(db)
       .where(condition)
-      .orderBy(SORTS[query.sort]!, desc(quotes.id))
+      .orderBy(sorts(customerView)[query.sort]!, desc(quotes.id))
       .limit(query.pageSize)
       .offset((query.page - 1) * query.pageSize),
     db
@@ -99,6 +107,24 @@ export async function nextQuoteNumber(db: Executor): Promise<string> {
 export async function insertQuote(db: Executor, values: typeof quotes.$inferInsert) {
   const [row] = await db.insert(quotes).values(values).returning({ id: quotes.id });
   return row!.id;
+}
+
+/** The quote a customer's earlier submission with this idempotency key made, if any. */
+export async function findQuoteIdByClientKey(db: Executor, submittedBy: string, clientKey: string) {
+  const [row] = await db
+    .select({ id: quotes.id })
+    .from(quotes)
+    .where(and(eq(quotes.submittedBy, submittedBy), eq(quotes.clientKey, clientKey)));
+  return row?.id;
+}
+
+/** The unique (submitted_by, client_key) violation of a racing duplicate, also when drizzle wraps the driver's error. */
+export function isClientKeyConflict(err: unknown): boolean {
+  for (let e: unknown = err; e && typeof e === 'object'; e = (e as { cause?: unknown }).cause) {
+    const pg = e as { code?: unknown; constraint?: unknown };
+    if (pg.code === '23505' && pg.constraint === 'quotes_submitter_client_key_uq') return true;
+  }
+  return false;
 }
 
 /** Applies `changes` only if the quote is still at `version`; returns false when it was not. */

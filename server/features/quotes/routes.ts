@@ -14,7 +14,7 @@ import { addAttachment, readAttachment } from './attachments';
 import type { QuoteDeps } from './deps';
 import { patchQuote, previewChange } from './edit';
 import { offerPdf } from './offer';
-import { createQuote, getQuote, listQuotes } from './service';
+import { getQuote, listQuotes, submitQuote } from './service';
 import { singleUpload } from './upload';
 import { approve, assign, decline, requestChange, sendBack } from './workflow';
 
@@ -23,6 +23,13 @@ const attachmentParams = idParams.extend({ attachmentId: z.uuid({ error: 'must b
 const versionBody = z.object({ version: z.int().min(1) });
 const revisionQuery = z.object({ revision: z.coerce.number().int().min(1).optional() });
 const pdfQuery = revisionQuery.extend({ units: z.enum(['SI', 'US']).default('SI') });
+/** A retry-safe submission: the client sends one key per request form (a UUID), the same on a retry. */
+const idempotencyHeader = z.object({
+  'Idempotency-Key': z
+    .string()
+    .regex(/^[\x21-\x7e]{8,200}$/, { error: 'must be 8 to 200 visible ASCII characters (a UUID)' })
+    .optional(),
+});
 
 export function quotesRouter(deps: QuoteDeps): Router {
   const r = Router();
@@ -30,7 +37,10 @@ export function quotesRouter(deps: QuoteDeps): Router {
   const id = (req: { params: unknown }) => parse(idParams, req.params, 'path').id;
 
   r.post('/', requireRole('customer'), async (req, res) => {
-    res.status(201).json(await createQuote(deps, currentUser(req), parse(createQuoteSchema, req.body)));
+    const key = parse(idempotencyHeader, { 'Idempotency-Key': req.get('Idempotency-Key') }, 'header')['Idempotency-Key'];
+    const { quote, created } = await submitQuote(deps, currentUser(req), parse(createQuoteSchema, req.body), key);
+    // 201 for a new quote; 200 with the same quote for a retry of a submission already stored
+    res.status(created ? 201 : 200).json(quote);
   });
   r.get('/', requireUser, async (req, res) => {
     res.json(await listQuotes(deps, currentUser(req), parse(listQuotesQuerySchema, req.query, 'query')));

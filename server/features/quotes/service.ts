@@ -11,13 +11,26 @@ import * as repo from './repository';
 
 /**
  * A customer's request: sized and priced at once (nothing is stored when the duty is impossible or
- * cannot be priced), stored as quote + budget revision 1 + event in one transaction.
+ * cannot be priced), stored as quote + budget revision 1 + event + the sales e-mail in one
+ * transaction. `clientKey` (the `Idempotency-Key` header) makes a retry safe: the same key from the
+ * same customer answers the quote it made the first time (`created: false`), also when both
+ * attempts race (the unique (submitted_by, client_key) constraint decides).
  */
-export async function createQuote(deps: QuoteDeps, customer: SessionUser, input: ReturnType<typeof createQuoteSchema.parse>) {
+export async function submitQuote(
+  deps: QuoteDeps,
+  customer: SessionUser,
+  input: ReturnType<typeof createQuoteSchema.parse>,
+  clientKey?: string,
+): Promise<{ quote: QuoteDetail; created: boolean }> {
+  if (clientKey) {
+    const earlier = await repo.findQuoteIdByClientKey(deps.db, customer.id, clientKey);
+    if (earlier) return { quote: await getQuote(deps, customer, earlier), created: false };
+  }
   const book = await activeBook(deps);
   const { design, alternatives } = await sizeWithBook(deps.config, input.duty, book);
   const price = priceWithBook(design, book, { quantity: input.quantity, needBy: input.needBy });
-  const id = await deps.db.transaction(async (tx) => {
+  const summary = designSummary(design);
+  const store = () => deps.db.transaction(async (tx) => {
     const number = await repo.nextQuoteNumber(tx);
     const revision = buildRevision(1, 'budget', customer, input.duty, design, alternatives, price, book);
     const quoteId = await repo.insertQuote(tx, {
@@ -33,18 +46,42 @@ export async function createQuote(deps: QuoteDeps, customer: SessionUser, input:
       duty: input.duty,
       priceTotalMinor: price.total_minor,
       currency: price.currency,
-      designSummary: designSummary(design),
+      designSummary: summary,
       customerTotalMinor: price.total_minor,
       customerQuantity: input.quantity,
-      customerDesignSummary: designSummary(design),
+      customerDesignSummary: summary,
+      clientKey: clientKey ?? null,
     });
     await repo.insertRevision(tx, { quoteId, number: 1, kind: 'budget', data: revision, priceBookVersion: book.version, totalMinor: price.total_minor, createdBy: customer.id });
     await repo.insertEvent(tx, { quoteId, actorId: customer.id, kind: 'submitted', message: input.notes ?? null });
+    await notifySubmitted(deps, tx, {
+      id: quoteId,
+      number,
+      organizationName: customer.organizationName,
+      submittedByName: customer.name,
+      reference: input.reference ?? null,
+      designSummary: summary,
+      priceTotal_minor: price.total_minor,
+      currency: price.currency,
+      quantity: input.quantity,
+    });
     return quoteId;
   });
-  const detail = await getQuote(deps, customer, id);
-  await notifySubmitted(deps, detail);
-  return detail;
+  let id: string;
+  try {
+    id = await store();
+  } catch (err) {
+    // a concurrent attempt with the same key committed first: answer with its quote
+    const earlier = clientKey && repo.isClientKeyConflict(err) ? await repo.findQuoteIdByClientKey(deps.db, customer.id, clientKey) : undefined;
+    if (!earlier) throw err;
+    return { quote: await getQuote(deps, customer, earlier), created: false };
+  }
+  return { quote: await getQuote(deps, customer, id), created: true };
+}
+
+/** A new quote without an idempotency key (the seed, scripts). */
+export async function createQuote(deps: QuoteDeps, customer: SessionUser, input: ReturnType<typeof createQuoteSchema.parse>): Promise<QuoteDetail> {
+  return (await submitQuote(deps, customer, input)).quote;
 }
 
 /** A quote the viewer may see; another organisation's quote does not exist for a customer (404). */
@@ -78,7 +115,7 @@ async function customerRevisionNumber(deps: QuoteDeps, id: string, current: numb
 export async function listQuotes(deps: QuoteDeps, viewer: SessionUser, query: ListQuotesQuery) {
   const scope = isStaff(viewer) ? { userId: viewer.id } : { userId: viewer.id, organizationId: viewer.organizationId };
   const { items, total } = await repo.listQuotes(deps.db, query, scope);
-  return { items: items.map(toSummary), total, page: query.page, pageSize: query.pageSize };
+  return { items: items.map((row) => toSummary(viewer, row)), total, page: query.page, pageSize: query.pageSize };
 }
 
 export type { CreateQuoteInput };

@@ -22,8 +22,10 @@ const stale = () => conflict('Someone changed this quote since you opened it; re
 
 export async function assign(deps: QuoteDeps, user: SessionUser, id: string, version: number) {
   await loadVisible(deps, user, id);
-  if (!(await repo.updateQuoteAtVersion(deps.db, id, version, { assigneeId: user.id }))) throw stale();
-  await repo.insertEvent(deps.db, { quoteId: id, actorId: user.id, kind: 'assigned', message: `${user.name} took this quote`, internal: true });
+  await deps.db.transaction(async (tx) => {
+    if (!(await repo.updateQuoteAtVersion(tx, id, version, { assigneeId: user.id }))) throw stale();
+    await repo.insertEvent(tx, { quoteId: id, actorId: user.id, kind: 'assigned', message: `${user.name} took this quote`, internal: true });
+  });
   return getQuote(deps, user, id);
 }
 
@@ -54,36 +56,40 @@ export async function approve(deps: QuoteDeps, user: SessionUser, id: string, in
     if (!ok) throw stale();
     await repo.insertRevision(tx, { quoteId: id, number, kind: 'offer', data, priceBookVersion: current!.priceBookVersion, totalMinor: data.price.total_minor, createdBy: user.id });
     await repo.insertEvent(tx, { quoteId: id, actorId: user.id, kind: 'approved', message: input.message ?? null, data: { revision: number } });
+    await notifyCustomer(
+      deps,
+      tx,
+      id,
+      `Your offer ${row.number} is ready`,
+      `Our engineers reviewed your request and approved offer ${row.number}, revision ${number}: ` +
+        `${row.designSummary}, ${money(data.price.total_minor, row.currency)} for ${data.price.quantity} unit(s), ` +
+        `valid until ${validUntil.toUTCString().slice(0, 16)}.` +
+        (input.message ? `\n\n${input.message}` : '') +
+        `\n\nRead it, download the PDF and accept it here:`,
+    );
   });
-  const detail = await getQuote(deps, user, id);
-  await notifyCustomer(
-    deps,
-    id,
-    `Your offer ${detail.number} is ready`,
-    `Our engineers reviewed your request and approved offer ${detail.number}, revision ${number}: ` +
-      `${detail.designSummary}, ${money(detail.priceTotal_minor, detail.currency)} for ${detail.quantity} unit(s), ` +
-      `valid until ${validUntil.toUTCString().slice(0, 16)}.` +
-      (input.message ? `\n\n${input.message}` : '') +
-      `\n\nRead it, download the PDF and accept it here:`,
-  );
-  return detail;
+  return getQuote(deps, user, id);
 }
 
 export async function sendBack(deps: QuoteDeps, user: SessionUser, id: string, input: { version?: number; message: string }) {
   const row = await loadVisible(deps, user, id);
   requireStatus(row.status, OPEN, 'sent back with questions');
-  if (!(await repo.updateQuoteAtVersion(deps.db, id, input.version ?? row.version, { status: 'questions', assigneeId: row.assigneeId ?? user.id }))) throw stale();
-  await repo.insertEvent(deps.db, { quoteId: id, actorId: user.id, kind: 'questions', message: input.message });
-  await notifyCustomer(deps, id, `Questions about your request ${row.number}`, `${user.name} has questions before we can make an offer:\n\n${input.message}\n\nAnswer with "Request a change" on the quote:`);
+  await deps.db.transaction(async (tx) => {
+    if (!(await repo.updateQuoteAtVersion(tx, id, input.version ?? row.version, { status: 'questions', assigneeId: row.assigneeId ?? user.id }))) throw stale();
+    await repo.insertEvent(tx, { quoteId: id, actorId: user.id, kind: 'questions', message: input.message });
+    await notifyCustomer(deps, tx, id, `Questions about your request ${row.number}`, `${user.name} has questions before we can make an offer:\n\n${input.message}\n\nAnswer with "Request a change" on the quote:`);
+  });
   return getQuote(deps, user, id);
 }
 
 export async function decline(deps: QuoteDeps, user: SessionUser, id: string, input: { version?: number; message: string }) {
   const row = await loadVisible(deps, user, id);
   requireStatus(row.status, [...OPEN, 'approved'], 'declined');
-  if (!(await repo.updateQuoteAtVersion(deps.db, id, input.version ?? row.version, { status: 'declined' }))) throw stale();
-  await repo.insertEvent(deps.db, { quoteId: id, actorId: user.id, kind: 'declined', message: input.message });
-  await notifyCustomer(deps, id, `We cannot offer ${row.number}`, `We are sorry: we cannot make an offer for request ${row.number}.\n\n${input.message}`);
+  await deps.db.transaction(async (tx) => {
+    if (!(await repo.updateQuoteAtVersion(tx, id, input.version ?? row.version, { status: 'declined' }))) throw stale();
+    await repo.insertEvent(tx, { quoteId: id, actorId: user.id, kind: 'declined', message: input.message });
+    await notifyCustomer(deps, tx, id, `We cannot offer ${row.number}`, `We are sorry: we cannot make an offer for request ${row.number}.\n\n${input.message}`);
+  });
   return getQuote(deps, user, id);
 }
 
@@ -91,8 +97,10 @@ export async function decline(deps: QuoteDeps, user: SessionUser, id: string, in
 export async function requestChange(deps: QuoteDeps, user: SessionUser, id: string, input: { version?: number; message: string }) {
   const row = await loadVisible(deps, user, id);
   requireStatus(row.status, ['in-review', 'questions', 'approved'], 'changed');
-  if (!(await repo.updateQuoteAtVersion(deps.db, id, input.version ?? row.version, { status: 'in-review' }))) throw stale();
-  await repo.insertEvent(deps.db, { quoteId: id, actorId: user.id, kind: 'change-requested', message: input.message });
-  await notifySales(deps, id, row.assigneeEmail ?? undefined, `${row.organizationName} asks for a change to ${row.number}`, `${user.name} wrote:\n\n${input.message}`);
+  await deps.db.transaction(async (tx) => {
+    if (!(await repo.updateQuoteAtVersion(tx, id, input.version ?? row.version, { status: 'in-review' }))) throw stale();
+    await repo.insertEvent(tx, { quoteId: id, actorId: user.id, kind: 'change-requested', message: input.message });
+    await notifySales(deps, tx, id, row.assigneeEmail ?? undefined, `${row.organizationName} asks for a change to ${row.number}`, `${user.name} wrote:\n\n${input.message}`);
+  });
   return getQuote(deps, user, id);
 }
