@@ -37,6 +37,8 @@ interface RequestOptions {
   body?: unknown;
   /** Paths whose 401 means "not signed in yet" rather than "session expired". */
   quietUnauthorized?: boolean;
+  /** Extra request headers (e.g. `Idempotency-Key`). */
+  headers?: Record<string, string>;
 }
 
 let unauthorizedHandler: (() => void) | null = null;
@@ -51,6 +53,7 @@ const BASE = '/api';
 export async function request<T>(path: string, options: RequestOptions = {}): Promise<T> {
   const method = options.method ?? 'GET';
   const headers: Record<string, string> = {
+    ...options.headers,
     Accept: 'application/json',
     'X-Requested-With': 'bundlesmith',
   };

@@ -18,9 +18,13 @@ import { request } from './http';
 export type QuoteList = { items: QuoteSummary[]; total: number; page: number; pageSize: number };
 export type QuoteChange = { duty?: CreateQuoteInput['duty']; design?: DesignEdit; priceOverrides?: { key: string; amount_minor: number; reason: string }[]; quantity?: number };
 
-/** `POST /api/quotes` (customer): sized and priced at once; the budget offer awaiting review. */
-export function createQuote(input: CreateQuoteInput): Promise<QuoteDetail> {
-  return request<QuoteDetail>('/quotes', { method: 'POST', body: input });
+/**
+ * `POST /api/quotes` (customer): sized and priced at once; the budget offer awaiting review.
+ * `idempotencyKey` (one per request form, the same on every retry) makes a retry after a lost answer
+ * return the quote the first attempt stored instead of a second one.
+ */
+export function createQuote(input: CreateQuoteInput, idempotencyKey?: string): Promise<QuoteDetail> {
+  return request<QuoteDetail>('/quotes', { method: 'POST', body: input, ...(idempotencyKey ? { headers: { 'Idempotency-Key': idempotencyKey } } : {}) });
 }
 
 /** `GET /api/quotes`: customers get their organisation's, staff get all. */

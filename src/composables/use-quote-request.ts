@@ -4,6 +4,8 @@
  * On submit the server sizes and prices at once; 400 field errors land under their fields (the duty's
  * keyed `duty.process.…` by the server, `process.…` by the duty form), a 422 becomes the one
  * explanation of why the duty cannot be met. Files go up right after the quote exists.
+ * One idempotency key per form, sent again on every retry: a retry after a lost answer gets the
+ * quote the first attempt stored, never a second one.
  */
 import { reactive, ref } from 'vue';
 import { createQuoteSchema, type QuoteDetail } from '@shared/schemas/quotes';
@@ -30,6 +32,12 @@ function splitFields(fields: FieldErrors): { duty: FieldErrors; details: FieldEr
   return { duty, details };
 }
 
+/** A random key; `randomUUID` exists only in secure contexts (https, localhost), so fall back to random bytes. */
+function newIdempotencyKey(): string {
+  if (typeof crypto.randomUUID === 'function') return crypto.randomUUID();
+  return Array.from(crypto.getRandomValues(new Uint8Array(16)), (b) => b.toString(16).padStart(2, '0')).join('');
+}
+
 export function useQuoteRequest() {
   const duty = useSizingForm();
   const details = reactive({ quantity: 1 as number | null, needBy: null as string | null, reference: '', notes: '' });
@@ -40,6 +48,7 @@ export function useQuoteRequest() {
   const explanation = ref<Explanation | null>(null);
   /** set once the server has stored the request: it must not be sent twice */
   const created = ref<QuoteDetail | null>(null);
+  const idempotencyKey = newIdempotencyKey();
 
   function applyError(error: ApiError): void {
     const { duty: dutyFields, details: detailFields } = splitFields(error.fields);
@@ -67,7 +76,7 @@ export function useQuoteRequest() {
     }
     busy.value = true;
     try {
-      created.value = await createQuote({ ...rest, duty: dutyInput });
+      created.value = await createQuote({ ...rest, duty: dutyInput }, idempotencyKey);
     } catch (error) {
       if (isApiError(error)) applyError(error);
       else failure.value = errorMessage(error);
