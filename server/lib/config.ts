@@ -29,7 +29,10 @@ const envSchema = z.object({
   STRIPE_API_URL: z.url().optional(),
   /** where the buyer is sent to pay in local runs (the fake's hosted test page); unset in production */
   STRIPE_PAY_URL: z.url().optional(),
-  LOGIN_MAX_PER_ACCOUNT: z.coerce.number().int().min(1).default(8),
+  /** failed sign-ins for one account from one address per window (then 4× that per day: a stepped backoff) */
+  LOGIN_MAX_PER_ACCOUNT_ADDRESS: z.coerce.number().int().min(1).default(5),
+  /** failed sign-ins for one account from all addresses together per window; not counted from an address it signed in from lately */
+  LOGIN_MAX_PER_ACCOUNT: z.coerce.number().int().min(1).default(50),
   LOGIN_MAX_PER_ADDRESS: z.coerce.number().int().min(1).default(60),
   LOGIN_WINDOW_MINUTES: z.coerce.number().int().min(1).default(15),
   PASSWORD_RESET_TTL_MINUTES: z.coerce.number().int().min(5).max(1440).default(60),

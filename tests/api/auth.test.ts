@@ -54,10 +54,10 @@ describe('sign-in', () => {
     expect(broken.body.error.code).toBe('malformed-body');
   });
 
-  it('limits failed attempts per account: the attempt after the limit gets 429 even with the right password', async () => {
+  it('limits failed attempts per account from one address: the attempt after the limit gets 429 even with the right password', async () => {
     const email = `${unique('locked')}@pellmar.example`;
     const agent = client(t.app);
-    const limit = t.config.LOGIN_MAX_PER_ACCOUNT;
+    const limit = t.config.LOGIN_MAX_PER_ACCOUNT_ADDRESS; // other addresses: auth-lockout.test.ts
     for (let i = 0; i < limit; i++) {
       await agent.post('/api/auth/login').send({ email, password: 'guess-number-' + i }).expect(401);
     }

@@ -9,7 +9,7 @@ import {
 } from '../../../shared/schemas/auth';
 import type { createPassport } from '../../lib/auth/passport';
 import { HttpError, unauthorized } from '../../lib/errors';
-import { loginLimiters, mailLimiter } from '../../lib/rate-limits';
+import { loginLimiters, mailLimiter, rememberSignInAddress } from '../../lib/rate-limits';
 import { parse } from '../../lib/validate';
 import * as service from './service';
 
@@ -24,7 +24,13 @@ export function authRouter(deps: service.AuthDeps, pool: pg.Pool, passport: Pass
       if (err) return next(err);
       if (!user) return next(new HttpError(401, 'invalid-credentials', 'The e-mail address or the password is wrong.'));
       // passport ≥ 0.6 regenerates the session here: a new session id at every sign-in.
-      req.logIn(user, (loginErr) => (loginErr ? next(loginErr) : res.json({ user })));
+      req.logIn(user, (loginErr) => {
+        if (loginErr) return next(loginErr);
+        // this address becomes one the account's cap across addresses does not hold (see rate-limits.ts)
+        rememberSignInAddress(pool, req)
+          .catch(() => undefined)
+          .then(() => res.json({ user }), next);
+      });
     })(req, res, next);
   });
 
