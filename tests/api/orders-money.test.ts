@@ -67,7 +67,7 @@ describe('cancel racing release', () => {
       }
     }
     console.log(`[race] 8 rounds: release won ${wins.release}, cancel won ${wins.cancel}`);
-  });
+  }, 120_000); // eight paid orders, each through the payment fake and its webhook
 
   it('queues the refund and the customer e-mail with the cancellation; the job asks once with the order\'s idempotency key', async () => {
     const { orderId, intentId } = await paidOrder();
