@@ -62,8 +62,9 @@ export function advanceOrder(id: string, input: AdvanceOrderInput): Promise<Orde
  * `POST /api/orders/:id/cancel`: the buyer or sales while deposit-paid or released, an admin later.
  * The deposit is refunded through Stripe (less the cancellation fee once released).
  */
-export function cancelOrder(id: string, reason: string): Promise<Order> {
-  return request<Order>(`/orders/${id}/cancel`, { method: 'POST', body: { reason } });
+export function cancelOrder(id: string, reason: string, from: OrderStatus): Promise<Order> {
+  // `from`: the status the user saw; if the order moved on meanwhile the server answers 409
+  return request<Order>(`/orders/${id}/cancel`, { method: 'POST', body: { reason, from } });
 }
 
 /** `GET /api/orders/:id/build-sheet` (sales, shop, admin). */

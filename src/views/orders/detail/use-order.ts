@@ -36,7 +36,7 @@ export function useOrder() {
   /** Throws the server's refusal for the dialog to show. */
   async function cancel(reason: string): Promise<void> {
     if (!order.value) return;
-    order.value = await cancelOrder(order.value.id, reason);
+    order.value = await cancelOrder(order.value.id, reason, order.value.status);
   }
 
   return { order, loading, notFound, failure, load, cancel };
