@@ -54,6 +54,12 @@ export const registerSchema = z
   });
 export type RegisterInput = z.infer<typeof registerSchema>;
 
+/** `POST /api/auth/register/confirm`: the token from the e-mailed link that finishes a registration. */
+export const registerConfirmSchema = z.object({
+  token: z.string({ error: 'The link is incomplete.' }).min(20, { error: 'The link is incomplete.' }).max(4000, { error: 'The link is too long.' }),
+});
+export type RegisterConfirmInput = z.infer<typeof registerConfirmSchema>;
+
 export const resetRequestSchema = z.object({ email });
 export type ResetRequestInput = z.infer<typeof resetRequestSchema>;
 

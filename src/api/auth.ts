@@ -1,6 +1,7 @@
 import {
   sessionUserSchema,
   type LoginInput,
+  type RegisterConfirmInput,
   type RegisterInput,
   type ResetConfirmInput,
   type ResetRequestInput,
@@ -36,8 +37,19 @@ export async function logout(): Promise<void> {
   await request<void>('/auth/logout', { method: 'POST', quietUnauthorized: true });
 }
 
-export async function register(input: RegisterInput): Promise<SessionUser> {
-  return readUser(await request<UserReply>('/auth/register', { method: 'POST', body: input, quietUnauthorized: true }));
+/**
+ * `POST /api/auth/register`: through an invitation the account is made and signed in (the user);
+ * a new organisation answers only "check your e-mail" (the message), whether or not the address
+ * or the organisation exists, and the e-mailed link finishes it (`confirmRegistration`).
+ */
+export async function register(input: RegisterInput): Promise<{ user: SessionUser } | { message: string }> {
+  const reply = await request<UserReply & { message?: string }>('/auth/register', { method: 'POST', body: input, quietUnauthorized: true });
+  return typeof reply?.message === 'string' ? { message: reply.message } : { user: readUser(reply) };
+}
+
+/** `POST /api/auth/register/confirm`: the e-mailed link's token creates the account and signs it in. */
+export async function confirmRegistration(input: RegisterConfirmInput): Promise<SessionUser> {
+  return readUser(await request<UserReply>('/auth/register/confirm', { method: 'POST', body: input, quietUnauthorized: true }));
 }
 
 export async function requestPasswordReset(input: ResetRequestInput): Promise<void> {

@@ -26,6 +26,7 @@ export const routes: RouteRecordRaw[] = [
     [
       ['/sign-in', 'sign-in', 'Sign in', true],
       ['/register', 'register', 'Create an account', true],
+      ['/register/confirm', 'register-confirm', 'Create an account', true],
       ['/reset-password', 'reset-password', 'Reset your password', false],
       ['/reset-password/confirm', 'reset-password-confirm', 'Choose a new password', false],
     ] as const

@@ -30,8 +30,15 @@ export const useSessionStore = defineStore('session', () => {
     return user.value;
   }
 
-  async function register(input: RegisterInput): Promise<SessionUser> {
-    user.value = await authApi.register(input);
+  /** The signed-in user (invitation), or the server's "check your e-mail" message (new organisation). */
+  async function register(input: RegisterInput): Promise<{ user: SessionUser } | { message: string }> {
+    const reply = await authApi.register(input);
+    if ('user' in reply) user.value = reply.user;
+    return reply;
+  }
+
+  async function confirmRegistration(token: string): Promise<SessionUser> {
+    user.value = await authApi.confirmRegistration({ token });
     return user.value;
   }
 
@@ -48,5 +55,5 @@ export const useSessionStore = defineStore('session', () => {
     user.value = null;
   }
 
-  return { user, signedIn, role, ensureLoaded, signIn, register, signOut, clear };
+  return { user, signedIn, role, ensureLoaded, signIn, register, confirmRegistration, signOut, clear };
 });

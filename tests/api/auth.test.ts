@@ -7,6 +7,14 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
+/** A new customer through the whole registration: request, e-mailed link, confirmation. */
+async function registerCustomer(email: string, password: string): Promise<void> {
+  await client(t.app).post('/api/auth/register').send({ name: 'Test Customer', email, password, organizationName: unique('Test Org') }).expect(202);
+  const mail = await waitForMail(t.config, email, /Finish creating/);
+  const token = new URL(mail.links.find((l) => l.includes('/register/confirm'))!).searchParams.get('token')!;
+  await client(t.app).post('/api/auth/register/confirm').send({ token }).expect(201);
+}
+
 describe('sign-in', () => {
   it('signs in a demo user, normalising the e-mail, and rotates the session id', async () => {
     const agent = client(t.app);
@@ -84,19 +92,54 @@ describe('cross-site protection', () => {
 });
 
 describe('registration', () => {
-  it('creates a customer with a new organisation and signs them in', async () => {
+  it('creates a customer with a new organisation through the e-mailed link, and signs them in', async () => {
     const email = `${unique('eng')}@newco.example`;
     const organizationName = unique('Newco Compressors');
+    const res = await client(t.app).post('/api/auth/register').send({ name: 'Alex Test', email, password: 'long-enough-pass', organizationName });
+    expect(res.status).toBe(202);
+    expect(res.body).toEqual({ message: expect.stringMatching(/check your e-mail/i) });
+    // nothing exists until the owner of the mailbox follows the link
+    expect((await t.database.pool.query('select 1 from users where email = $1', [email])).rowCount).toBe(0);
+    const mail = await waitForMail(t.config, email, /Finish creating your Bundlesmith account/);
+    const token = new URL(mail.links.find((l) => l.includes('/register/confirm?token='))!).searchParams.get('token')!;
+
     const agent = client(t.app);
-    const res = await agent.post('/api/auth/register').send({ name: 'Alex Test', email, password: 'long-enough-pass', organizationName });
-    expect(res.status).toBe(201);
-    expect(res.body.user).toMatchObject({ email, role: 'customer', organizationName });
+    const done = await agent.post('/api/auth/register/confirm').send({ token });
+    expect(done.status).toBe(201);
+    expect(done.body.user).toMatchObject({ email, role: 'customer', organizationName });
     await agent.get('/api/auth/me').expect(200);
-    const dup = await client(t.app).post('/api/auth/register').send({ name: 'Again', email, password: 'long-enough-pass', organizationName: unique('Other') });
-    expect(dup.status).toBe(409);
+    const again = await client(t.app).post('/api/auth/register/confirm').send({ token });
+    expect(again.status).toBe(409); // used: the account exists
+    const altered = await client(t.app).post('/api/auth/register/confirm').send({ token: token.slice(0, -4) + 'AAAA' });
+    expect(altered.status).toBe(400);
+    expect(altered.body.error.code).toBe('invalid-token');
     const { rows } = await t.database.pool.query('select password_hash from users where email = $1', [email]);
     expect(rows[0].password_hash).toMatch(/^scrypt\$/);
     expect(rows[0].password_hash).not.toContain('long-enough-pass');
+  });
+
+  it('answers an e-mail or organisation already registered exactly as a new one, and tells only the mailbox (was: 409 email-taken)', async () => {
+    const fresh = await client(t.app)
+      .post('/api/auth/register')
+      .send({ name: 'New Person', email: `${unique('new')}@newco.example`, password: 'long-enough-pass', organizationName: unique('Fresh Co') });
+    const takenEmail = await client(t.app)
+      .post('/api/auth/register')
+      .send({ name: 'Prober', email: 'customer@pellmar.example', password: 'long-enough-pass', organizationName: unique('Probe Co') });
+    const probeEmail = `${unique('probe')}@newco.example`;
+    const takenOrg = await client(t.app)
+      .post('/api/auth/register')
+      .send({ name: 'Prober', email: probeEmail, password: 'long-enough-pass', organizationName: 'Pellmar Compression' });
+    for (const res of [takenEmail, takenOrg]) {
+      expect(res.status).toBe(fresh.status);
+      expect(res.body).toEqual(fresh.body);
+      expect(Object.keys(res.headers).sort()).toEqual(Object.keys(fresh.headers).sort());
+    }
+    expect(fresh.status).toBe(202);
+    const notice = await waitForMail(t.config, 'customer@pellmar.example', /Someone tried to register with your address/);
+    expect(notice.text).toMatch(/reset-password/);
+    await waitForMail(t.config, probeEmail, /Your Bundlesmith registration/);
+    // the owner's password is untouched
+    await signedIn(t.app, 'customer@pellmar.example');
   });
 
   it('asks for exactly one of organisation name or invitation, and a long enough password', async () => {
@@ -131,7 +174,7 @@ describe('registration', () => {
 describe('password reset', () => {
   it('resets through the e-mailed link, once, and ends old sessions', async () => {
     const email = `${unique('reset')}@pellmar.example`;
-    await client(t.app).post('/api/auth/register').send({ name: 'Reset Me', email, password: 'first-password-1', organizationName: unique('Reset Org') }).expect(201);
+    await registerCustomer(email, 'first-password-1');
     const oldSession = await signedIn(t.app, email, 'first-password-1');
 
     const req = await client(t.app).post('/api/auth/password-reset/request').send({ email });
@@ -155,7 +198,7 @@ describe('password reset', () => {
 
   it('refuses an expired link', async () => {
     const email = `${unique('late')}@pellmar.example`;
-    await client(t.app).post('/api/auth/register').send({ name: 'Late', email, password: 'first-password-1', organizationName: unique('Late Org') }).expect(201);
+    await registerCustomer(email, 'first-password-1');
     await client(t.app).post('/api/auth/password-reset/request').send({ email }).expect(202);
     const mail = await waitForMail(t.config, email, /Reset/);
     const token = new URL(mail.links[0]!).searchParams.get('token')!;

@@ -2,6 +2,7 @@ import { Router } from 'express';
 import type pg from 'pg';
 import {
   loginSchema,
+  registerConfirmSchema,
   registerSchema,
   resetConfirmSchema,
   resetRequestSchema,
@@ -49,9 +50,21 @@ export function authRouter(deps: service.AuthDeps, pool: pg.Pool, passport: Pass
     res.json({ user: req.user });
   });
 
+  // A new organisation: 202 and the same message whether or not the e-mail or the organisation
+  // exists; the mailbox gets the link (or a notice). An invitation signs in at once (201 { user }).
   r.post('/register', mailLimiter(pool, 'register'), async (req, res, next) => {
     const input = parse(registerSchema, req.body);
-    const user = await service.register(deps, input);
+    if (input.inviteToken !== undefined) {
+      const user = await service.registerInvited(deps, { ...input, inviteToken: input.inviteToken });
+      return req.logIn(user, (err) => (err ? next(err) : res.status(201).json({ user })));
+    }
+    await service.requestRegistration(deps, { ...input, organizationName: input.organizationName! });
+    res.status(202).json({ message: service.REGISTRATION_SENT });
+  });
+
+  r.post('/register/confirm', mailLimiter(pool, 'register-confirm'), async (req, res, next) => {
+    const { token } = parse(registerConfirmSchema, req.body);
+    const user = await service.confirmRegistration(deps, token);
     req.logIn(user, (err) => (err ? next(err) : res.status(201).json({ user })));
   });
 

@@ -6,6 +6,7 @@ import { decoyHash, hashPassword, verifyPassword } from '../../lib/auth/password
 import { hashToken, newToken } from '../../lib/auth/tokens';
 import type { Mailer } from '../../lib/mail';
 import * as repo from './repository';
+import { openRegistration, sealRegistration } from './registration-token';
 
 export interface AuthDeps {
   db: Db;
@@ -22,46 +23,108 @@ export async function verifyCredentials(deps: AuthDeps, email: string, password:
   return user;
 }
 
+/** How long the link that finishes a self-registration works. */
+export const REGISTRATION_LINK_HOURS = 24;
+
+/** What every self-registration request answers, whether the address or organisation exists or not. */
+export const REGISTRATION_SENT = 'Check your e-mail to continue: we sent a message to the address you gave.';
+
 /**
- * Self-registration: a new customer organisation, or joining the organisation (and role) of an
- * invitation. The invitation must be open and addressed to the same e-mail.
+ * Self-registration of a new customer organisation, step 1. The answer never says whether the
+ * e-mail or the organisation exists (REGISTRATION_SENT, always); the mailbox learns it: a new address
+ * gets the link that creates the account (confirmRegistration), a registered one a "someone tried to
+ * register with your address" notice, and an organisation name in use an invitation hint.
  */
-export async function register(deps: AuthDeps, input: RegisterInput): Promise<SessionUser> {
+export async function requestRegistration(deps: AuthDeps, input: RegisterInput & { organizationName: string }): Promise<void> {
+  const passwordHash = await hashPassword(input.password); // hashed either way: the same time for every answer
+  const existing = await repo.findLoginByEmail(deps.db, input.email);
+  const signature = `\n\nAlder Creek Thermal Works`;
+  if (existing || (await repo.emailTaken(deps.db, input.email))) {
+    await deps.mailer.send({
+      to: input.email,
+      subject: 'Someone tried to register with your address',
+      text:
+        `Hello${existing ? ` ${existing.name}` : ''},\n\nSomeone (perhaps you) tried to create a Bundlesmith account with this e-mail address, ` +
+        `which already has one. Nothing was changed.\n\nTo sign in: ${deps.config.APP_URL}/sign-in\n` +
+        `Forgot the password? ${deps.config.APP_URL}/reset-password\n\nIf it was not you, ignore this message.${signature}`,
+    });
+    return;
+  }
+  if (await repo.organizationNameTaken(deps.db, input.organizationName)) {
+    await deps.mailer.send({
+      to: input.email,
+      subject: 'Your Bundlesmith registration',
+      text:
+        `Hello ${input.name},\n\nAn organisation called "${input.organizationName}" is registered already, so no account was made. ` +
+        `Ask a colleague there to invite you (their administrator can), or register again under your company's full name.${signature}`,
+    });
+    return;
+  }
+  const token = sealRegistration(deps.config.SESSION_SECRET, {
+    name: input.name,
+    email: input.email,
+    passwordHash,
+    organizationName: input.organizationName,
+    expiresAt: Date.now() + REGISTRATION_LINK_HOURS * 3_600_000,
+  });
+  await deps.mailer.send({
+    to: input.email,
+    subject: 'Finish creating your Bundlesmith account',
+    text:
+      `Hello ${input.name},\n\nFollow this link within ${REGISTRATION_LINK_HOURS} hours to create the account of ${input.organizationName}:\n\n` +
+      `${deps.config.APP_URL}/register/confirm?token=${token}\n\nIf you did not ask for an account, ignore this message.${signature}`,
+  });
+}
+
+/** Step 2: the link from the e-mail creates the organisation and its first user (409 when taken since). */
+export async function confirmRegistration(deps: AuthDeps, token: string): Promise<SessionUser> {
+  const pending = openRegistration(deps.config.SESSION_SECRET, token);
+  if (!pending) {
+    throw new HttpError(400, 'invalid-token', 'This registration link is not valid any more; register again.', { token: 'expired or altered' });
+  }
+  const userId = await deps.db.transaction(async (tx) => {
+    if (await repo.emailTaken(tx, pending.email)) {
+      throw conflict('Your account exists already (this link was used): sign in.', 'email-taken');
+    }
+    if (await repo.organizationNameTaken(tx, pending.organizationName)) {
+      throw conflict(`An organisation called "${pending.organizationName}" was registered meanwhile: ask a colleague there for an invitation.`, 'organization-taken');
+    }
+    const organizationId = await repo.insertCustomerOrganization(tx, pending.organizationName);
+    return repo.insertUser(tx, { organizationId, email: pending.email, name: pending.name, role: 'customer', passwordHash: pending.passwordHash });
+  });
+  return (await repo.findSessionUser(deps.db, userId))!;
+}
+
+/**
+ * Registration through an admin's invitation: the invitation (sent to that address) is checked
+ * first, so a made-up token learns nothing about which addresses have accounts; then the account
+ * joins the invitation's organisation with its role and is signed in at once.
+ */
+export async function registerInvited(deps: AuthDeps, input: RegisterInput & { inviteToken: string }): Promise<SessionUser> {
   const passwordHash = await hashPassword(input.password);
   const userId = await deps.db.transaction(async (tx) => {
+    const invitation = await repo.takeOpenInvitation(tx, hashToken(input.inviteToken));
+    if (!invitation) {
+      throw new HttpError(400, 'invalid-invitation', 'This invitation link is not valid any more; ask for a new one.', {
+        inviteToken: 'expired, used or unknown',
+      });
+    }
+    if (invitation.email !== input.email) {
+      throw new HttpError(400, 'invitation-email', 'Register with the e-mail address the invitation was sent to.', {
+        email: 'must be the invited address',
+      });
+    }
     if (await repo.emailTaken(tx, input.email)) {
       throw conflict('An account with this e-mail address exists already; sign in or reset the password.', 'email-taken');
     }
-    if (input.inviteToken !== undefined) {
-      const invitation = await repo.takeOpenInvitation(tx, hashToken(input.inviteToken));
-      if (!invitation) {
-        throw new HttpError(400, 'invalid-invitation', 'This invitation link is not valid any more; ask for a new one.', {
-          inviteToken: 'expired, used or unknown',
-        });
-      }
-      if (invitation.email !== input.email) {
-        throw new HttpError(400, 'invitation-email', 'Register with the e-mail address the invitation was sent to.', {
-          email: 'must be the invited address',
-        });
-      }
-      await repo.markInvitationAccepted(tx, invitation.id);
-      return repo.insertUser(tx, {
-        organizationId: invitation.organizationId,
-        email: input.email,
-        name: input.name,
-        role: invitation.role,
-        passwordHash,
-      });
-    }
-    const orgName = input.organizationName!;
-    if (await repo.organizationNameTaken(tx, orgName)) {
-      throw conflict(
-        `An organisation called "${orgName}" is registered already: ask a colleague there for an invitation.`,
-        'organization-taken',
-      );
-    }
-    const organizationId = await repo.insertCustomerOrganization(tx, orgName);
-    return repo.insertUser(tx, { organizationId, email: input.email, name: input.name, role: 'customer', passwordHash });
+    await repo.markInvitationAccepted(tx, invitation.id);
+    return repo.insertUser(tx, {
+      organizationId: invitation.organizationId,
+      email: input.email,
+      name: input.name,
+      role: invitation.role,
+      passwordHash,
+    });
   });
   return (await repo.findSessionUser(deps.db, userId))!;
 }
