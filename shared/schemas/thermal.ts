@@ -55,8 +55,8 @@ export const LIMITS = {
   pressureDrop_Pa: [0, 3e7],
   /** m: the shop's length increment */
   lengthStep_m: [0.001, 1],
-  /** members of any list of choices in a sizing request */
-  listMax: 8,
+  /** members of any list of choices in a sizing request: the sizing page offers 9 tube sizes, 8 materials */
+  listMax: 10,
 } as const;
 
 const L = LIMITS;
