@@ -125,6 +125,9 @@ export const coolantBoundarySchema = z.object({
   baffleSpacing_m: within('Baffle spacing', L.baffleSpacing_m[0], L.baffleSpacing_m[1], 'm').optional(),
   /** fraction of the shell diameter, 0.15–0.45 */
   baffleCut: within('Baffle cut', 0.15, 0.45, '(a fraction of the shell diameter)').optional(),
+  /** first and last baffle spacing (at the shell nozzles), m; default: the central spacing widened where the nozzle needs room */
+  inletBaffleSpacing_m: within('Inlet baffle spacing', L.baffleSpacing_m[0], L.baffleSpacing_m[1], 'm').optional(),
+  outletBaffleSpacing_m: within('Outlet baffle spacing', L.baffleSpacing_m[0], L.baffleSpacing_m[1], 'm').optional(),
   tubePitch_m: within('Tube pitch', L.tubePitch_m[0], L.tubePitch_m[1], 'm').optional(),
   layout: layoutSchema.optional(),
   foulingInside_m2K_W: fouling('Tube-side fouling resistance').optional(),
@@ -139,6 +142,17 @@ const tubePasses = z
   .max(8)
   .refine((n) => n === 1 || n % 2 === 0, { error: 'Tube passes must be 1 or an even number up to 8.' });
 
+/** Which side the process (hot) stream is on; the coolant takes the other. */
+export const processSideSchema = z.enum(['tubes', 'shell']);
+export type ProcessSide = z.infer<typeof processSideSchema>;
+/** Shell-side methods (shared/thermal/exchanger/shell-methods.ts); Bell–Delaware is the default. */
+export const shellMethodSchema = z.enum(['bell-delaware', 'kern']);
+export type ShellMethod = z.infer<typeof shellMethodSchema>;
+/** 1–4 identical shells in series (each 1-2, or counterflow 1-1 for one tube pass). */
+export const SHELLS_IN_SERIES_MAX = 4;
+const shellsInSeries = (what: string) =>
+  z.int({ error: `${what} must be a whole number from 1 to ${SHELLS_IN_SERIES_MAX}.` }).min(1, { error: `${what} must be a whole number from 1 to ${SHELLS_IN_SERIES_MAX}.` }).max(SHELLS_IN_SERIES_MAX, { error: `${what} must be a whole number from 1 to ${SHELLS_IN_SERIES_MAX}.` });
+
 export const geometrySchema = z
   .object({
     tubeOuterDiameter_m: tubeDiameter(),
@@ -150,6 +164,10 @@ export const geometrySchema = z
     tubeMaterial: z.enum(tubeMaterialIds).default('carbon-steel'),
     /** optional tube-side nozzle bore, m: adds nozzle losses to the pressure drop */
     nozzleDiameter_m: within('Nozzle bore', L.nozzleDiameter_m[0], L.nozzleDiameter_m[1], 'm').optional(),
+    /** the process stream in the tubes (default) or on the shell side; a wall boundary needs 'tubes' */
+    processSide: processSideSchema.optional(),
+    /** identical shells in series (default 1); tubeCount and tubeLength_m are per shell */
+    shellsInSeries: shellsInSeries('Shells in series').optional(),
   })
   .refine((g) => g.tubeWall_m < g.tubeOuterDiameter_m / 2, { error: 'The tube wall must be thinner than half the outside diameter.', path: ['tubeWall_m'] })
   .refine((g) => g.tubeCount % g.tubePasses === 0, { error: 'The tube count must divide evenly among the tube passes.', path: ['tubeCount'] });
@@ -161,6 +179,8 @@ export const rateRequestSchema = z.object({
   boundary: boundarySchema,
   geometry: geometrySchema,
   correlation: correlationSchema,
+  /** force a shell-side method; default Bell–Delaware (Kern is always computed beside it) */
+  shellMethod: shellMethodSchema.optional(),
 });
 export type RateRequest = z.infer<typeof rateRequestSchema>;
 export type RateRequestInput = z.input<typeof rateRequestSchema>;
@@ -178,6 +198,10 @@ export const sizeConstraintsSchema = z.object({
   maxShellInnerDiameter_m: shellDiameter('Maximum shell inner diameter').optional(),
   /** shop's length increment, m (default 0.1) */
   lengthStep_m: within('Length step', L.lengthStep_m[0], L.lengthStep_m[1], 'm').optional(),
+  /** where the process stream may go; default 'either' (the search tries both and says why one won) */
+  processSide: z.enum(['tubes', 'shell', 'either']).optional(),
+  /** most identical shells in series the search may use (default 4) */
+  maxShellsInSeries: shellsInSeries('Most shells in series').optional(),
 });
 
 export const sizeRequestSchema = z.object({
@@ -185,6 +209,7 @@ export const sizeRequestSchema = z.object({
   boundary: boundarySchema,
   constraints: sizeConstraintsSchema,
   correlation: correlationSchema,
+  shellMethod: shellMethodSchema.optional(),
 });
 export type SizeRequest = z.infer<typeof sizeRequestSchema>;
 export type SizeRequestInput = z.input<typeof sizeRequestSchema>;
@@ -228,10 +253,32 @@ export const rateResultSchema = z.object({
   shellInnerDiameter_m: num.optional(),
   condensate_kg_s: num.optional(),
   latentDuty_W: num.optional(),
+  // ---- issue 10: allocation, shell-side method, shells in series (coolant boundary only) ----
+  processSide: processSideSchema.optional(),
+  tubeFluid: z.enum(['process', 'coolant']).optional(),
+  shellFluid: z.enum(['process', 'coolant']).optional(),
+  shellsInSeries: z.int().optional(),
+  /** the method whose shell-side h and ΔP were used */
+  shellMethod: shellMethodSchema.optional(),
+  shellHtcKern_W_m2K: num.optional(),
+  /** total over all shells */
+  shellPressureDropKern_Pa: num.optional(),
+  shellReynolds: num.optional(),
+  shellCorrections: z.object({ Jc: num, Jl: num, Jb: num, Js: num, Jr: num }).optional(),
+  shellPressureDropBreakdown: z.object({ crossflow_Pa: num, window_Pa: num, ends_Pa: num, nozzles_Pa: num.optional(), total_Pa: num }).optional(),
+  baffleSpacing_m: num.optional(),
+  inletBaffleSpacing_m: num.optional(),
+  outletBaffleSpacing_m: num.optional(),
+  baffleCut: num.optional(),
+  /** per shell */
+  baffleCount: z.int().optional(),
+  /** tubes rated against tubes the laid-out tubesheet holds (1 = full) */
+  shellFill: num.optional(),
 });
 export type RateResult = z.infer<typeof rateResultSchema>;
 
 export const designSchema = z.object({
+  /** per shell (as tubeLength_m); area_m2 counts every shell */
   tubeCount: z.int(),
   tubeLength_m: num,
   tubePasses: z.int(),
@@ -244,6 +291,18 @@ export const designSchema = z.object({
   shellInnerDiameter_m: num.optional(),
   shellLabel: z.string().optional(),
   baffleSpacing_m: num.optional(),
+  // issue 10; absent on designs stored before it (readers default: tubes, 1 shell, cut 0.25)
+  processSide: processSideSchema.optional(),
+  shellsInSeries: z.int().optional(),
+  baffleCut: num.optional(),
+  baffleCount: z.int().optional(),
+  inletBaffleSpacing_m: num.optional(),
+  outletBaffleSpacing_m: num.optional(),
+  /** why each fluid goes where, in words */
+  allocationReason: z.string().optional(),
+  /** on the recommended design: why it won */
+  recommendedReason: z.string().optional(),
+  /** total over all shells */
   area_m2: num,
   requiredLength_m: num,
   overSurface_pct: num,
