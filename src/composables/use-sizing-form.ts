@@ -58,6 +58,8 @@ function defaults() {
       materials: [] as string[],
       tubePasses: [] as number[],
       layouts: [] as number[],
+      /** which side the process stream goes on; 'either' lets the engine try both */
+      processSide: 'either' as 'either' | 'tubes' | 'shell',
     },
     correlation: 'auto',
   };
@@ -139,6 +141,8 @@ function build(m: SizingModel): Built {
     materials: some(l.materials),
     tubePasses: some(l.tubePasses),
     layouts: some(l.layouts),
+    // a wall (bath) keeps the process in the tubes: the choice only exists with a coolant stream
+    processSide: m.sink === 'coolant' && l.processSide !== 'either' ? l.processSide : undefined,
   };
   return { input: { process, boundary, constraints, correlation: m.correlation }, problems, empties };
 }

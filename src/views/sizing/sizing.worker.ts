@@ -16,6 +16,8 @@ export interface PreviewSummary {
   tubeOuterDiameter_m: number;
   tubeWallLabel: string;
   tubePasses: number;
+  processSide: 'tubes' | 'shell';
+  shellsInSeries: number;
   outletTemp_C: number;
   coolantOutletTemp_C?: number;
   duty_W: number;
@@ -43,6 +45,8 @@ self.onmessage = (event: MessageEvent<PreviewRequest>) => {
         tubeOuterDiameter_m: d.tubeOuterDiameter_m,
         tubeWallLabel: d.tubeWallLabel,
         tubePasses: d.tubePasses,
+        processSide: d.processSide ?? 'tubes',
+        shellsInSeries: d.shellsInSeries ?? 1,
         outletTemp_C: d.rating.outletTemp_C,
         coolantOutletTemp_C: d.rating.coolantOutletTemp_C,
         duty_W: d.rating.duty_W,
