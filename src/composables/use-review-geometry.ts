@@ -12,11 +12,18 @@ import { STANDARD_SHELLS } from '@shared/thermal/geometry/shells';
 import { tubeSizeOf } from '@shared/thermal/geometry/tubes';
 import { errorMessage } from '../api/http';
 import { previewQuoteChange } from '../api/quotes';
+import { readDesign, type ProcessSide } from '../views/sizing/parts/design-words';
 
-type Geometry = DesignEdit;
+/** The editable bundle: a quote's design edit plus the allocation, the shells in series and the baffle cut. */
+export type Geometry = DesignEdit & { processSide?: ProcessSide; shellsInSeries?: number; baffleCut?: number };
 
-/** The editable part of a design (a wall-cooled design has no shell: the smallest pipe shell stands in). */
+/**
+ * The editable part of a design (a wall-cooled design has no shell: the smallest pipe shell stands
+ * in). Designs stored before engine v2 read as process in the tubes, one shell, 25 % cut and the
+ * old default spacing, so opening one shows no change until the engineer makes one.
+ */
 export function geometryOf(d: Omit<Design, 'rating'>): Geometry {
+  const v = readDesign(d);
   return {
     tubeCount: d.tubeCount,
     tubeLength_m: d.tubeLength_m,
@@ -26,11 +33,16 @@ export function geometryOf(d: Omit<Design, 'rating'>): Geometry {
     tubePasses: d.tubePasses,
     layout: d.layout ?? 30,
     shellInnerDiameter_m: d.shellInnerDiameter_m ?? STANDARD_SHELLS[0]!.innerDiameter_m,
-    ...(d.baffleSpacing_m ? { baffleSpacing_m: d.baffleSpacing_m } : {}),
+    ...(v.baffleSpacing_m ? { baffleSpacing_m: v.baffleSpacing_m } : {}),
+    processSide: v.processSide,
+    shellsInSeries: v.shellsInSeries,
+    baffleCut: v.baffleCut,
   };
 }
 
-const same = (a: Geometry, b: Geometry) => JSON.stringify(a) === JSON.stringify(b);
+/** equal whatever order the keys were set in (a field deleted and set again moves to the end) */
+const canon = (g: Geometry) => JSON.stringify(Object.entries(g).filter(([, v]) => v !== undefined).sort(([a], [b]) => a.localeCompare(b)));
+const same = (a: Geometry, b: Geometry) => canon(a) === canon(b);
 
 export function useReviewGeometry(quoteId: () => string, duty: Ref<SizeRequest | null>) {
   const model = reactive<Geometry>({
@@ -54,6 +66,8 @@ export function useReviewGeometry(quoteId: () => string, duty: Ref<SizeRequest |
   }
 
   const changed = computed(() => baseline.value !== null && !same({ ...model }, baseline.value));
+  /** a wall (bath) boundary has no shell side: the process stays in the tubes, no baffles, one unit */
+  const hasShell = computed(() => duty.value?.boundary.kind !== 'wall');
   const walls = computed(() => tubeSizeOf(model.tubeOuterDiameter_m)?.walls ?? []);
 
   /** keeps the wall valid when the OD changes: the same gauge if offered, else the catalogue's middle one */
@@ -106,7 +120,7 @@ export function useReviewGeometry(quoteId: () => string, duty: Ref<SizeRequest |
     },
   );
 
-  return { model, baseline, changed, walls, rating, price, priceError, pricing, setFrom };
+  return { model, baseline, changed, hasShell, walls, rating, price, priceError, pricing, setFrom };
 }
 
 export type ReviewGeometry = ReturnType<typeof useReviewGeometry>;
