@@ -87,3 +87,50 @@ export function lmtdCorrectionBowman(p: number, r: number): number {
   const num = Math.log((1 - p) / (1 - p * r));
   return ((s / (r - 1)) * num) / Math.log(den);
 }
+
+/**
+ * N identical shells in series, counter-current between shells (each shell 1-2, or counterflow 1-1
+ * when `tubePasses` is 1). `ntu` is the total UA/C_min of all shells; each shell has `ntu/N` and
+ * the per-shell ε₁ from `effectiveness`. Overall (Kays & London 1984, ch. 2; Bowman, Mueller &
+ * Nagle 1940): `X = ((1 − ε₁ Cr)/(1 − ε₁))^N`, `ε = (X − 1)/(X − Cr)`; at `Cr = 1`:
+ * `ε = N ε₁/(1 + (N − 1) ε₁)`. N = 1 is the one-shell relation.
+ */
+export function effectivenessShellsInSeries(ntu: number, cr: number, tubePasses: number, shells: number): number {
+  const n = Math.max(1, Math.round(shells));
+  const e1 = effectiveness(ntu / n, cr, tubePasses);
+  if (n === 1) return e1;
+  if (cr > 1 - CR_EPS) return (n * e1) / (1 + (n - 1) * e1);
+  if (e1 >= 1) return 1;
+  const x = Math.pow((1 - e1 * cr) / (1 - e1), n);
+  return (x - 1) / (x - cr);
+}
+
+/**
+ * Inverse of `effectivenessShellsInSeries`: the total NTU of N shells giving `eff`; `Infinity` when
+ * no number of transfer units reaches it (ε ≥ 1, or the per-shell ε₁ beyond the 1–2 maximum).
+ * Per shell: `Y = ((1 − ε Cr)/(1 − ε))^{1/N}`, `ε₁ = (Y − 1)/(Y − Cr)`; at `Cr = 1`
+ * `ε₁ = ε/(N − (N − 1) ε)`; then `NTU = N · NTU₁(ε₁)`.
+ */
+export function ntuShellsInSeries(eff: number, cr: number, tubePasses: number, shells: number): number {
+  const n = Math.max(1, Math.round(shells));
+  if (eff <= 0) return 0;
+  if (eff >= 1) return Infinity;
+  let e1: number;
+  if (n === 1) e1 = eff;
+  else if (cr > 1 - CR_EPS) e1 = eff / (n - (n - 1) * eff);
+  else {
+    const y = Math.pow((1 - eff * cr) / (1 - eff), 1 / n);
+    e1 = (y - 1) / (y - cr);
+  }
+  return n * ntuFromEffectiveness(e1, cr, tubePasses);
+}
+
+/**
+ * LMTD correction factor of N shells in series: `F = NTU_counterflow(ε, Cr)/NTU`, ε the overall
+ * effectiveness of `effectivenessShellsInSeries` (Bowman, Mueller & Nagle 1940 chart values for
+ * 2, 3, … shell passes). 1 for counterflow shells (`tubePasses` 1); N = 1 equals `lmtdCorrectionFactor`.
+ */
+export function lmtdCorrectionFactorShells(ntu: number, cr: number, tubePasses: number, shells: number): number {
+  if (tubePasses === 1 || ntu <= 0) return 1;
+  return ntuCounterflow(effectivenessShellsInSeries(ntu, cr, tubePasses, shells), cr) / ntu;
+}
