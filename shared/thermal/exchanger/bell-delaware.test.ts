@@ -98,6 +98,9 @@ describe('ideal tube bank (Taborek, HEDH §3.3.7 coefficients, memory)', () => {
       }
     }
   });
+  it('45°, 10 ≤ Re < 100 row (a1 = 1.498, not the misprinted 0.498) meets its neighbours within 2 %', () => {
+    for (const edge of [100, 10]) expect(idealBankJ(edge * 0.999, 1.25, 45) / idealBankJ(edge, 1.25, 45)).toBeCloseTo(1, 1.7);
+  });
   it('60° uses the 30° table', () => {
     expect(idealBankJ(5000, 1.25, 60)).toBe(idealBankJ(5000, 1.25, 30));
   });
