@@ -148,6 +148,12 @@ describe('corrections: limiting cases and invariants', () => {
     expect(r.corrections.Js).toBeLessThan(1);
   });
 
+  it('no flow gives h = 0 and ΔP = 0, not NaN', () => {
+    const r = shellSideBellDelaware(prepareBellDelaware(base), 0, w, w.viscosity);
+    expect(r.h).toBe(0);
+    expect(r.dp.total_Pa).toBe(0);
+  });
+
   it('J_r is 1 at Re ≥ 100, blends linearly to J_rr at Re = 20, and is never below 0.4', () => {
     expect(laminarCorrection(0.7, 100)).toBe(1);
     expect(laminarCorrection(0.7, 20)).toBeCloseTo(0.7, 12);

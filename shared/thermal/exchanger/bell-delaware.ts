@@ -299,7 +299,8 @@ export function prepareBellDelaware(s: BaffledShell): PreparedShell {
 export function shellSideBellDelaware(p: PreparedShell, massFlow: number, bulk: FluidProperties, muWall: number): ShellSideResult {
   const mu = bulk.viscosity;
   const g = massFlow / p.sm;
-  const re = (p.dOuter * g) / mu;
+  // no flow: no convection, no drop (Re^a2 with a2 < 0 would be infinite)
+  const re = Math.max((p.dOuter * g) / mu, 1e-9);
   const laminar = re < 100;
   const t = IDEAL_BANK[p.table]!;
   const j = idealJ(t, re, p.pitchTerm);
