@@ -200,6 +200,11 @@ describe('orders and the shop', () => {
     const rows = csv.trim().split('\n').slice(1).map((l) => l.split(','));
     const tubes = rows.filter((r) => r[3] === 'tube').map((r) => ({ x: Number(r[1]), y: Number(r[2]) }));
     expect(tubes.length).toBe(order.design.tubeCount);
+    // one pattern for every tubesheet of the cooler: two per shell, stated on each line and on the sheet
+    const shells = order.design.shellsInSeries ?? 1;
+    expect(sheet.shells.inSeries).toBe(shells);
+    expect(sheet.tubesheet.quantity).toBe(2 * shells);
+    for (const r of rows) expect(Number(r[6])).toBe(2 * shells);
     const od = order.design.tubeOuterDiameter_m * 1000;
     const pitch = sheet.tubesheet.pitch_mm;
     const all = rows.map((r) => ({ x: Number(r[1]), y: Number(r[2]) }));

@@ -12,7 +12,7 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { BuildSheet } from '../../shared/schemas/build-sheet';
 import { renderBuildSheetPdf } from '../../server/features/orders/build-sheet-pdf';
-import { buildSheetFixture, HYDROTEST_BASIS, INSPECTION } from './build-sheet-pdf.fixture';
+import { buildSheetFixture, HYDROTEST_BASIS } from './build-sheet-pdf.fixture';
 
 /** Domain brief section 4, in the build sheet's words. */
 const CAUTIONS = [
@@ -117,15 +117,17 @@ describe('build-sheet PDF', { timeout: 60000 }, () => {
   it('states the hydrotest pressures in bar(g) and psig, rounded up, with the code basis', () => {
     const all = text();
     // 650 000 Pa = 6.5 bar; / 6894.757 = 94.27 psi, up to 95. 520 000 Pa = 5.2 bar; 75.42 psi, up to 76.
-    expect(all).toContain('Tube side 6.5 bar(g) 95 psig');
-    expect(all).toContain('Shell side 5.2 bar(g) 76 psig');
+    expect(all).toContain('Tube side Ethylene glycol–water, 50 % by mass 6.5 bar(g) 95 psig');
+    expect(all).toContain('Shell side Water 5.2 bar(g) 76 psig');
     expect(all).toContain(`Basis: ${HYDROTEST_BASIS}`);
   });
 
   it('has every inspection point with checked-by and date columns', () => {
     const all = text();
     expect(all).toContain('Done Inspection point Checked by Date');
-    for (const item of INSPECTION) expect(all).toContain(item);
+    for (const item of sheet.inspection) expect(all).toContain(item);
+    expect(all).toContain('Hydrotest shell side, then tube side, at the pressures above, held and inspected for leaks');
+    expect(all).toContain('Nozzles marked for their side: tube side Ethylene glycol–water, 50 % by mass (process), shell side Water (coolant)');
   });
 
   it('numbers every page "page x of y" and sets title, author, subject and a fixed date', () => {

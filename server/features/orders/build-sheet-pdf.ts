@@ -1,8 +1,10 @@
 /**
- * The build sheet as an A4 shop document (issue 5): the order, the design, the cut list, the bill
- * of materials and labour, the tubesheet with its drilling pattern drawn to scale on a page of its
- * own, baffles, nozzles and joint, hydrotest pressures with their basis, an inspection checklist,
- * and the cautions of the domain brief (section 4) on the first page.
+ * The build sheet as an A4 shop document (issue 5): the order, the design (shells in series and
+ * which fluid goes where), the cut list per shell and for the cooler, the bill of materials and
+ * labour, the tubesheets (how many) with their drilling pattern drawn to scale on a page of its own,
+ * baffles (count per shell and in all, spacings, cut), nozzles marked by fluid, interconnections
+ * between shells, the joint, each side's hydrotest pressure with its basis, an inspection
+ * checklist, and the cautions of the domain brief (section 4) on the first page.
  */
 import type { BuildSheet } from '../../../shared/schemas/build-sheet';
 import { ORDER_STATUS_LABEL, type OrderStatus } from '../../../shared/schemas/orders';
@@ -65,20 +67,35 @@ function drawOpening(doc: PDFKit.PDFDocument, s: BuildSheet): void {
   drawNoticeBox(doc, { title: 'Cautions', paragraphs: s.cautions });
 }
 
+const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
+const streamWord = (stream: string) => (stream === 'wall' ? 'bath' : stream);
+
 function drawDesignAndCuts(doc: PDFKit.PDFDocument, s: BuildSheet): void {
   const d = s.design;
+  const a = s.allocation;
+  const n = s.shells.inSeries;
+  const area = n === 1 ? `${formatNumber(d.area_m2, 3)} m²` : `${formatNumber(d.area_m2, 3)} m² in all (${formatNumber(d.areaPerShell_m2, 3)} m² per shell)`;
   section(doc, '1  Design', factsTable([
-    ['Tubes', `${d.tubeCount} × ${d.tubeOd} OD, ${d.tubeWall}`],
+    ['Shells in series', n === 1 ? '1' : `${n}: build ${n} identical shells`],
+    ['In the tubes', `${a.tubeSide.fluid} (${streamWord(a.tubeSide.stream)})`],
+    ['On the shell side', `${a.shellSide.fluid} (${streamWord(a.shellSide.stream)})`],
+    ['Why this allocation', a.reason],
+    ['Tubes', `${d.tubeCount} × ${d.tubeOd} OD, ${d.tubeWall}${n > 1 ? ' per shell' : ''}`],
     ['Tube material', d.tubeMaterial],
     ['Tube length (finished)', mmFromM(d.tubeLength_m)],
     ['Tube passes', String(d.tubePasses)],
     ['Layout', layoutName(d.layout)],
     ['Pitch', mm(d.pitch_mm)],
     ['Shell', `${d.shell}, ${mm(d.shellInnerDiameter_mm)} ID`],
-    ['Heat-transfer area', `${formatNumber(d.area_m2, 3)} m²`],
+    ['Heat-transfer area', area],
   ]));
+  if (n > 1) {
+    doc.moveDown(0.3);
+    drawParagraphs(doc, [s.shells.instruction], 9.5);
+  }
   const c = s.cutList;
-  section(doc, '2  Cut list', {
+  const row = [String(c.tubes), mmFromM(c.cutLength_m), `${mmFromM(c.finishedLength_m)} + ${mmFromM(c.allowance_m)}`, c.material, c.od, c.wall, metres(c.totalLength_m / c.shells)];
+  section(doc, n === 1 ? '2  Cut list' : `2  Cut list (per shell, then ${n} shells)`, {
     columns: [
       { header: 'Tubes', weight: 8, align: 'right', font: FONT.semibold },
       { header: 'Cut length', weight: 13, align: 'right', font: FONT.semibold },
@@ -88,7 +105,7 @@ function drawDesignAndCuts(doc: PDFKit.PDFDocument, s: BuildSheet): void {
       { header: 'Gauge', weight: 10 },
       { header: 'Total length', weight: 13, align: 'right', font: FONT.semibold },
     ],
-    rows: [[String(c.tubes), mmFromM(c.cutLength_m), `${mmFromM(c.finishedLength_m)} + ${mmFromM(c.allowance_m)}`, c.material, c.od, c.wall, metres(c.totalLength_m)]],
+    rows: n === 1 ? [row] : [row, { cells: [String(c.tubesAllShells), mmFromM(c.cutLength_m), `× ${n} shells`, c.material, c.od, c.wall, metres(c.totalLength_m)], emphasis: true }],
   });
 }
 
@@ -108,7 +125,10 @@ function drawMaterials(doc: PDFKit.PDFDocument, s: BuildSheet): void {
 
 function drawTubesheet(doc: PDFKit.PDFDocument, s: BuildSheet, reduction: number): void {
   const t = s.tubesheet;
-  section(doc, '3  Tubesheets (two, drilled alike)', factsTable([
+  const n = s.shells.inSeries;
+  const title = n === 1 ? '3  Tubesheets (two, drilled alike)' : `3  Tubesheets (${t.quantity}: two per shell, all drilled alike)`;
+  section(doc, title, factsTable([
+    ['Tubesheets to drill', n === 1 ? '2' : `${t.quantity} (2 per shell × ${n} shells)`],
     ['Tube holes', String(t.holeCount)],
     ['Tie-rod holes', String(t.tieRodHoles)],
     ['Hole diameter', mm(t.holeDiameter_mm)],
@@ -124,15 +144,22 @@ function drawTubesheet(doc: PDFKit.PDFDocument, s: BuildSheet, reduction: number
 
 function drawShellParts(doc: PDFKit.PDFDocument, s: BuildSheet): void {
   const b = s.baffles;
-  const nozzle = (side: 'tube' | 'shell') => s.nozzles.filter((n) => n.side === side).map((n) => `NPS ${formatNumber(n.nps, 3)}, ${n.rating}`).join('; ') || '–';
-  section(doc, '4  Baffles, nozzles and joint', factsTable([
-    ['Baffles', `${b.count} segmental`],
-    ['Baffle spacing', mm(b.spacing_mm)],
-    ['Baffle cut', `${formatNumber(b.cut_pct, 3)} % of the shell ID`],
+  const n = s.shells.inSeries;
+  const nozzle = (side: 'tube' | 'shell') =>
+    s.nozzles.filter((x) => x.side === side).map((x) => `NPS ${formatNumber(x.nps, 3)}, ${x.rating}, ${x.perShell} per shell (in + out), marked ${x.fluid}`).join('; ') || '–';
+  const spacing = b.inletSpacing_mm === b.spacing_mm && b.outletSpacing_mm === b.spacing_mm
+    ? `${mm(b.spacing_mm)} (inlet and outlet the same)`
+    : `${mm(b.spacing_mm)} central; inlet ${mm(b.inletSpacing_mm)}, outlet ${mm(b.outletSpacing_mm)}`;
+  const rows: [string, string][] = [
+    ['Baffles', n === 1 ? `${b.count} segmental` : `${b.count} segmental per shell; ${b.total} in all (${n} shells)`],
+    ['Baffle spacing', spacing],
+    ['Baffle cut', `${formatNumber(b.cut_pct, 3)} % of the shell ID (${mm(b.cut_mm)})`],
     ['Baffle thickness', mm(b.thickness_mm)],
     ['Nozzles, tube side', nozzle('tube')],
     ['Nozzles, shell side', nozzle('shell')],
-  ]), 30); // the joint sentence stays with the table
+  ];
+  for (const c of s.shells.interconnections) rows.push([`Interconnection ${c.from} to ${c.to}`, `${c.side} side, flanged spool NPS ${formatNumber(c.nps, 3)}: outlet of shell ${c.from} to inlet of shell ${c.to}`]);
+  section(doc, '4  Baffles, nozzles and joint', factsTable(rows), 30); // the joint sentence stays with the table
   doc.moveDown(0.4);
   drawParagraphs(doc, [`Tube-to-tubesheet joint: ${s.joint}.`]);
 }
@@ -142,11 +169,17 @@ function drawHydrotest(doc: PDFKit.PDFDocument, s: BuildSheet): void {
   const tube = testPressure(h.tubeSide_Pa);
   const shell = testPressure(h.shellSide_Pa);
   section(doc, '6  Hydrotest', {
-    columns: [{ header: 'Side', weight: 40 }, { header: 'Test pressure, bar(g)', weight: 30, align: 'right', font: FONT.semibold }, { header: 'Test pressure, psig', weight: 30, align: 'right', font: FONT.semibold }],
-    rows: [['Tube side', tube.bar, tube.psig], ['Shell side', shell.bar, shell.psig]],
-  });
+    columns: [
+      { header: 'Side', weight: 18 },
+      { header: 'Fluid in service', weight: 34 },
+      { header: 'Test pressure, bar(g)', weight: 24, align: 'right', font: FONT.semibold },
+      { header: 'Test pressure, psig', weight: 24, align: 'right', font: FONT.semibold },
+    ],
+    rows: [['Tube side', h.tubeSideFluid, tube.bar, tube.psig], ['Shell side', h.shellSideFluid, shell.bar, shell.psig]],
+  }, 70); // the basis stays with the table
   doc.moveDown(0.4);
-  drawParagraphs(doc, [`Basis: ${h.basis}`, 'Pressures are rounded up to 0.1 bar and 1 psi.'], 9);
+  const each = h.shells > 1 ? [`Test each of the ${h.shells} shells on both sides.`] : [];
+  drawParagraphs(doc, [...each, `Basis: ${h.basis}`, 'Pressures are rounded up to 0.1 bar and 1 psi.'], 9);
 }
 
 /** Renders the build sheet as an A4 PDF. */
@@ -175,7 +208,7 @@ export async function renderBuildSheetPdf(input: BuildSheet): Promise<Buffer> {
     drawing,
     caption: [
       `Order ${o.number} · ${t.holeCount} tube holes and ${t.tieRodHoles} tie-rod holes, Ø ${mm(t.holeDiameter_mm)}, pitch ${mm(t.pitch_mm)}, ${layoutName(t.layout)} layout, ${t.passLanes} pass-partition lane${t.passLanes === 1 ? '' : 's'}`,
-      `Tubesheet Ø ${mm(t.diameter_mm)} × ${mm(t.thickness_mm)}, outer tube limit Ø ${mm(t.outerTubeLimit_mm)} (dashed)`,
+      `Drill ${t.quantity} tubesheets to this pattern (2 per shell × ${plural(sheet.shells.inSeries, 'shell')}): Ø ${mm(t.diameter_mm)} × ${mm(t.thickness_mm)}, outer tube limit Ø ${mm(t.outerTubeLimit_mm)} (dashed)`,
     ],
   });
   drawPageFrames(doc, {

@@ -2,14 +2,21 @@
  * The build sheet of an order, derived from the frozen revision: cut list and bill of materials
  * (the pricing BOM, without prices), the drilling pattern from the engine's layout, baffles,
  * nozzles, the tube-to-tubesheet joint, hydrotest pressures with their basis, inspection points.
+ * A cooler of N identical shells in series is built as N shells of the one design (tube and baffle
+ * counts per shell, totals over the shells); which fluid goes in the tubes and which on the shell
+ * side sets the nozzle marking and each side's test pressure. `sheetFromDesign` is the pure part.
  */
 import type { SessionUser } from '../../../shared/schemas/auth';
-import type { BuildSheet } from '../../../shared/schemas/build-sheet';
-import { baffleCount, baffleThickness_m, tubesheetDiameter_m, tubesheetThickness_m } from '../pricing/bom-rules';
-import { billOfMaterials, nozzleSizes, shellSpec, tubeLabels } from '../pricing/bom';
+import type { BuildSheet, SideFluid } from '../../../shared/schemas/build-sheet';
+import type { PriceBook } from '../../../shared/schemas/price-book';
+import type { Design, SizeRequest } from '../../../shared/schemas/thermal';
+import { baffleThickness_m, tubesheetDiameter_m, tubesheetThickness_m } from '../pricing/bom-rules';
+import { billOfMaterials, interconnections, nozzleSizes, shellSpec, tubeLabels } from '../pricing/bom';
+import { baffleCutOf, bafflesPerShell, processSideOf, shellsOf } from '../pricing/design-fields';
 import { getPriceBookVersion } from '../pricing/repository';
 import * as quoteRepo from '../quotes/repository';
 import { materialName } from '../../lib/pdf/design-rows';
+import { fluidName } from '../../lib/pdf/duty-rows';
 import type { OrderDeps } from './deps';
 import { drillingPattern } from './drilling';
 import { getOrder } from './service';
@@ -33,30 +40,75 @@ export async function buildSheet(deps: OrderDeps, viewer: SessionUser, orderId: 
   // the revision the buyer accepted and paid for, whatever the quote did afterwards
   const revision = (await quoteRepo.findRevision(deps.db, order.quoteId, order.revisionNumber))!;
   const book = await getPriceBookVersion(deps.db, revision.priceBookVersion);
-  const d = order.design;
+  return sheetFromDesign({
+    order: { id: order.id, number: order.number, quoteNumber: order.quoteNumber, customer: order.organizationName, poNumber: order.poNumber, needBy: order.needBy, quantity: order.quantity, status: order.status },
+    design: order.design,
+    duty: revision.data.duty,
+    book,
+  });
+}
+
+/** Which fluid is on each side: the process where the design put it, the coolant (or a bath) on the other. */
+export function sidesOf(d: Design, duty: SizeRequest): { tube: SideFluid & { pressure_Pa: number }; shell: SideFluid & { pressure_Pa: number } } {
+  const b = duty.boundary;
+  const process = { stream: 'process' as const, fluid: fluidName(duty.process.fluid), pressure_Pa: duty.process.pressure_Pa };
+  const other = b.kind === 'coolant'
+    ? { stream: 'coolant' as const, fluid: fluidName(b.fluid), pressure_Pa: b.pressure_Pa }
+    : { stream: 'wall' as const, fluid: 'Bath at constant wall temperature', pressure_Pa: ATM };
+  // a wall boundary keeps the process in the tubes (issue 10 contract)
+  return processSideOf(d) === 'shell' && b.kind === 'coolant' ? { tube: other, shell: process } : { tube: process, shell: other };
+}
+
+const streamWord = (s: SideFluid) => (s.stream === 'process' ? 'process' : s.stream === 'coolant' ? 'coolant' : 'bath');
+
+export function sheetFromDesign(src: { order: BuildSheet['order']; design: Design; duty: SizeRequest; book: PriceBook }): BuildSheet {
+  const { order, design: d, duty, book } = src;
   const labels = tubeLabels(d);
   const ds = d.shellInnerDiameter_m ?? 0;
   const shell = shellSpec(d);
   const drilling = drillingPattern(d);
   const bom = billOfMaterials(d, book);
-  const duty = revision.data.duty;
-  const tubeGauge = Math.max(duty.process.pressure_Pa - ATM, 0);
-  const shellGauge = duty.boundary.kind === 'coolant' ? Math.max(duty.boundary.pressure_Pa - ATM, 0) : 0;
+  const N = shellsOf(d);
+  const sides = sidesOf(d, duty);
   const nozzles = nozzleSizes(d, ds);
   const cut = d.tubeLength_m + book.tubeCutAllowance_m;
+  const baffles = bafflesPerShell(d);
+  const spacing = d.baffleSpacing_m ?? 0;
+  const cutFraction = baffleCutOf(d);
+  const mmOf = (m: number) => Math.round(m * 1000);
+  const tubeWhat = `${sides.tube.fluid} (${streamWord(sides.tube)})`;
+  const shellWhat = `${sides.shell.fluid} (${streamWord(sides.shell)})`;
+  const reason = d.allocationReason
+    ?? (processSideOf(d) === 'shell' ? 'The process stream is on the shell side.' : 'The process stream is in the tubes (the arrangement of every design before fluid allocation was a design choice).');
   return {
-    order: { id: order.id, number: order.number, quoteNumber: order.quoteNumber, customer: order.organizationName, poNumber: order.poNumber, needBy: order.needBy, quantity: order.quantity, status: order.status },
+    order,
     design: {
       tubeCount: d.tubeCount, tubeOd: labels.od, tubeWall: labels.wall, tubeMaterial: materialName(d.tubeMaterial), tubeLength_m: d.tubeLength_m,
       tubePasses: d.tubePasses, layout: drilling.layout, pitch_mm: drilling.pitch_mm, shell: shell.label, shellInnerDiameter_mm: Math.round(ds * 1000 * 10) / 10, area_m2: d.area_m2,
+      shellsInSeries: N, areaPerShell_m2: d.area_m2 / N,
     },
-    cutList: { tubes: d.tubeCount, cutLength_m: cut, finishedLength_m: d.tubeLength_m, allowance_m: book.tubeCutAllowance_m, material: materialName(d.tubeMaterial), od: labels.od, wall: labels.wall, totalLength_m: cut * d.tubeCount },
+    shells: {
+      inSeries: N,
+      instruction: N === 1
+        ? 'Build 1 shell.'
+        : `Build ${N} identical shells to this sheet and connect them in series: on each side the outlet of shell k goes to the inlet of shell k + 1. Mark the shells 1 to ${N} in flow order.`,
+      interconnections: interconnections(N).map((c) => ({ ...c, nps: c.side === 'tube' ? nozzles.tube : nozzles.shell })),
+    },
+    allocation: { tubeSide: { stream: sides.tube.stream, fluid: sides.tube.fluid }, shellSide: { stream: sides.shell.stream, fluid: sides.shell.fluid }, reason },
+    cutList: {
+      tubes: d.tubeCount, cutLength_m: cut, finishedLength_m: d.tubeLength_m, allowance_m: book.tubeCutAllowance_m, material: materialName(d.tubeMaterial), od: labels.od, wall: labels.wall,
+      totalLength_m: cut * d.tubeCount * N, shells: N, tubesAllShells: d.tubeCount * N,
+    },
     billOfMaterials: bom.filter((b) => b.group === 'material').map(({ key, description, quantity, unit }) => ({ key, description, quantity, unit })),
     labour: bom.filter((b) => b.group === 'labour').map(({ key, description, quantity }) => ({ key, description, hours: quantity })),
     baffles: {
-      count: baffleCount(d.tubeLength_m, d.baffleSpacing_m),
-      spacing_mm: Math.round((d.baffleSpacing_m ?? 0) * 1000),
-      cut_pct: 25,
+      count: baffles,
+      total: baffles * N,
+      spacing_mm: mmOf(spacing),
+      inletSpacing_mm: mmOf(d.inletBaffleSpacing_m ?? spacing),
+      outletSpacing_mm: mmOf(d.outletBaffleSpacing_m ?? spacing),
+      cut_pct: Math.round(cutFraction * 1000) / 10,
+      cut_mm: mmOf(cutFraction * ds),
       thickness_mm: baffleThickness_m(ds) * 1000,
     },
     tubesheet: {
@@ -69,26 +121,35 @@ export async function buildSheet(deps: OrderDeps, viewer: SessionUser, orderId: 
       passLanes: d.tubePasses <= 1 ? 0 : d.tubePasses === 2 ? 1 : d.tubePasses / 2,
       thickness_mm: Math.round(tubesheetThickness_m(ds) * 1000),
       diameter_mm: Math.round(tubesheetDiameter_m(ds) * 1000),
+      quantity: drilling.tubesheets,
     },
     holes: drilling.holes,
     nozzles: [
-      { side: 'tube', nps: nozzles.tube, rating: 'Class 150' },
-      { side: 'shell', nps: nozzles.shell, rating: 'Class 150' },
+      { side: 'tube', nps: nozzles.tube, rating: 'Class 150', fluid: tubeWhat, perShell: 2 },
+      { side: 'shell', nps: nozzles.shell, rating: 'Class 150', fluid: shellWhat, perShell: 2 },
     ],
     joint: d.tubeMaterial.startsWith('stainless') || d.tubeMaterial.startsWith('titanium')
       ? 'Tubes expanded into grooved holes and seal-welded (common practice for this material)'
       : 'Tubes roller-expanded into holes with two grooves (common practice)',
     hydrotest: {
-      tubeSide_Pa: Math.round(HYDROTEST_FACTOR * designPressure(tubeGauge)),
-      shellSide_Pa: Math.round(HYDROTEST_FACTOR * designPressure(shellGauge)),
-      basis: 'ASME VIII-1 UG-99(b): 1.3 × design pressure × stress ratio (ratio taken as 1); design pressure estimated as the larger of 1.1 × and 1 bar above the operating gauge pressure of the duty (memory; the responsible engineer confirms the MAWP and the test pressure).',
+      tubeSide_Pa: Math.round(HYDROTEST_FACTOR * designPressure(Math.max(sides.tube.pressure_Pa - ATM, 0))),
+      shellSide_Pa: Math.round(HYDROTEST_FACTOR * designPressure(Math.max(sides.shell.pressure_Pa - ATM, 0))),
+      tubeSideFluid: sides.tube.fluid,
+      shellSideFluid: sides.shell.fluid,
+      shells: N,
+      basis: 'ASME VIII-1 UG-99(b): 1.3 × design pressure × stress ratio (ratio taken as 1); design pressure estimated as the larger of 1.1 × and 1 bar above the operating gauge pressure of the fluid on that side (memory; the responsible engineer confirms the MAWP and the test pressure).',
     },
     inspection: [
       'Material certificates of tubes, tubesheets, shell and nozzles checked against the bill of materials',
-      'Tubesheet drilling checked against the hole pattern (hole count, pitch, diameter, ligaments)',
+      `Tubesheet drilling checked against the hole pattern (hole count, pitch, diameter, ligaments) on all ${drilling.tubesheets} tubesheets`,
       'Tube expansion checked on sample holes (wall reduction per the joint procedure)',
+      `Baffles checked: ${baffles} per shell, cut ${Math.round(cutFraction * 100)} %, spacing as the sheet states`,
       'Welds visually inspected; NDE as the code and the customer specification require',
-      'Hydrotest shell side, then tube side, at the pressures above, held and inspected for leaks',
+      N === 1
+        ? 'Hydrotest shell side, then tube side, at the pressures above, held and inspected for leaks'
+        : `Hydrotest each of the ${N} shells: shell side, then tube side, at the pressures above, held and inspected for leaks`,
+      `Nozzles marked for their side: tube side ${tubeWhat}, shell side ${shellWhat}`,
+      ...(N > 1 ? [`Shells marked 1 to ${N} in flow order; interconnecting spools fitted as listed`] : []),
       'Nameplate, painting and nozzle covers checked before shipment',
     ],
     cautions: SHEET_CAUTIONS,

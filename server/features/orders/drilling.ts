@@ -1,12 +1,14 @@
 /**
  * The tubesheet drilling pattern of an order's design, from the engine's own tube layout (the same
  * lattice that gave the tube count): hole centres in mm from the tubesheet centre, tube holes and
- * tie-rod holes, and the pass each tube hole serves.
+ * tie-rod holes, and the pass each tube hole serves. Identical shells in series share the one pattern:
+ * every tubesheet of the cooler (two per shell) is drilled alike, and the pattern says how many.
  */
 import type { Design } from '../../../shared/schemas/thermal';
 import { MIN_PITCH_RATIO } from '../../../shared/thermal/geometry/tubes';
 import { tubeLayout, type Layout } from '../../../shared/thermal/geometry/layout';
 import { unprocessable } from '../../lib/errors';
+import { shellsOf } from '../pricing/design-fields';
 
 /** Tube hole over the tube OD for a standard expanded fit, mm (common practice; confirm with TEMA RCB-7.2). */
 export const HOLE_OVERSIZE_MM = 0.2;
@@ -26,6 +28,10 @@ export interface DrillingPattern {
   holeDiameter_mm: number;
   outerTubeLimit_mm: number;
   layout: Layout;
+  /** shells in series, each with two tubesheets */
+  shells: number;
+  /** tubesheets to drill to this pattern: 2 × shells */
+  tubesheets: number;
 }
 
 const mm = (m: number) => Math.round(m * 1e5) / 100;
@@ -73,12 +79,18 @@ export function drillingPattern(design: Design): DrillingPattern {
     holeDiameter_mm: mm(design.tubeOuterDiameter_m) + HOLE_OVERSIZE_MM,
     outerTubeLimit_mm: mm(lay.outerTubeLimit_m),
     layout: design.layout,
+    shells: shellsOf(design),
+    tubesheets: 2 * shellsOf(design),
   };
 }
 
-/** The CSV the drilling machine reads: one hole a line, mm from the tubesheet centre. */
+/**
+ * The CSV the drilling machine reads: one hole a line, mm from the tubesheet centre. The last
+ * column repeats how many tubesheets get this pattern (2 per shell), so a file read on its own
+ * still says it.
+ */
 export function drillingCsv(p: DrillingPattern): string {
-  const lines = ['hole,x_mm,y_mm,kind,pass,diameter_mm'];
-  for (const h of p.holes) lines.push(`${h.n},${h.x_mm.toFixed(2)},${h.y_mm.toFixed(2)},${h.kind},${h.kind === 'tube' ? h.pass : ''},${h.kind === 'tube' ? p.holeDiameter_mm.toFixed(2) : ''}`);
+  const lines = ['hole,x_mm,y_mm,kind,pass,diameter_mm,tubesheets'];
+  for (const h of p.holes) lines.push(`${h.n},${h.x_mm.toFixed(2)},${h.y_mm.toFixed(2)},${h.kind},${h.kind === 'tube' ? h.pass : ''},${h.kind === 'tube' ? p.holeDiameter_mm.toFixed(2) : ''},${p.tubesheets}`);
   return `${lines.join('\n')}\n`;
 }

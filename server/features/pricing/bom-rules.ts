@@ -32,10 +32,7 @@ export const discMass = (diameter: number, thickness: number, density: number) =
 /** Shell length between the tubesheets: tube length less the two tubesheets. */
 export const shellLength_m = (tubeLength: number, ds: number) => tubeLength - 2 * tubesheetThickness_m(ds);
 
-/** Baffles: round(L / B) − 1 (the cost proxy's count), none without a spacing. */
-export function baffleCount(tubeLength: number, spacing?: number): number {
-  return spacing ? Math.max(0, Math.round(tubeLength / spacing) - 1) : 0;
-}
+/* Baffles per shell: bafflesPerShell in design-fields.ts (the design's count, else from its spacings). */
 
 /** Segmental baffle: ~0.8 of the shell disc (a 20–25 % cut, common practice). */
 export const BAFFLE_AREA_FRACTION = 0.8;

@@ -8,10 +8,11 @@ import type { Design } from '../../../shared/schemas/thermal';
 import type { CostInput } from '../../../shared/thermal/cost-proxy';
 import { PIPE_SHELLS, tieRodCount, tubeSizeOf } from '../../../shared/thermal/geometry';
 import {
-  BAFFLE_AREA_FRACTION, baffleCount, baffleThickness_m, discMass, nozzleNpsByFlow, nozzleNpsByShell, paintArea_m2,
+  BAFFLE_AREA_FRACTION, baffleThickness_m, discMass, nozzleNpsByFlow, nozzleNpsByShell, paintArea_m2,
   plateDensity, plateGrades, rolledShellMass, round2, shellLength_m, tubesheetDiameter_m, tubesheetThickness_m,
 } from './bom-rules';
 import { demoPriceBook } from './demo-price-book';
+import { bafflesPerShell, shellsOf, type TrainFields } from './design-fields';
 import { noPrice } from './errors';
 
 export type FlangeClass = '150' | '300';
@@ -35,8 +36,11 @@ export interface BomItem {
   ref: BomRef;
 }
 
-/** A sizing candidate (CostInput) or a full Design; labels and rating are used when present. */
-export type BomInput = CostInput & Partial<Pick<Design, 'tubeWallLabel' | 'shellLabel' | 'tubePasses' | 'tubePitch_m' | 'rating'>>;
+/**
+ * A sizing candidate (CostInput) or a full Design; labels and rating are used when present. The
+ * issue-10 fields (shells in series, baffles) are optional: an old stored design is one shell.
+ */
+export type BomInput = CostInput & TrainFields & Partial<Pick<Design, 'tubeWallLabel' | 'shellLabel' | 'tubePasses' | 'tubePitch_m' | 'rating'>>;
 
 export type BomRules = Pick<PriceBook, 'tubeCutAllowance_m' | 'labourHours'>;
 
@@ -89,17 +93,36 @@ export function nozzleSizes(d: BomInput, ds: number): { tube: number; shell: num
 
 const mm = (m: number) => `${Math.round(m * 1000)} mm`;
 
+/**
+ * Interconnections of a train of `shells` in series: shell k's outlet to shell k+1's inlet, on the
+ * tube side and on the shell side, one each per pair of neighbours.
+ */
+export function interconnections(shells: number): { from: number; to: number; side: 'tube' | 'shell' }[] {
+  const out: { from: number; to: number; side: 'tube' | 'shell' }[] = [];
+  for (let k = 1; k < shells; k++) out.push({ from: k, to: k + 1, side: 'tube' }, { from: k, to: k + 1, side: 'shell' });
+  return out;
+}
+
+/**
+ * The bill of one cooler. N identical shells in series (`shellsInSeries`, default 1) multiply every
+ * per-shell item: tubes, two tubesheets, baffles, shell, a pair of heads, four nozzles, tie rods,
+ * gaskets, bolting, paint, and the labour of tube ends, baffles, nozzles, fit-up, hydrotest (each
+ * shell is tested on both sides) and painting. Between neighbouring shells each side gets an
+ * interconnection: a short flanged spool whose two flanged ends are priced from the book's nozzle
+ * table at the size of that side's nozzles. One shell gives exactly the lines it always did.
+ */
 export function billOfMaterials(d: BomInput, rules: BomRules = demoPriceBook, opts: BomOptions = {}): BomItem[] {
   const flangeClass = opts.flangeClass ?? '150';
   const tube = tubeLabels(d);
   const shell = shellSpec(d);
   const ds = shell.innerDiameter_m;
   const n = d.tubeCount;
+  const N = shellsOf(d);
   const grades = plateGrades(d.tubeMaterial);
   const tts = tubesheetThickness_m(ds);
   const dts = tubesheetDiameter_m(ds);
   const shellLen = shellLength_m(d.tubeLength_m, ds);
-  const baffles = baffleCount(d.tubeLength_m, d.baffleSpacing_m);
+  const baffles = bafflesPerShell(d);
   const tb = baffleThickness_m(ds);
   const noz = nozzleSizes(d, ds);
   const h = rules.labourHours;
@@ -108,33 +131,45 @@ export function billOfMaterials(d: BomInput, rules: BomRules = demoPriceBook, op
     quantity > 0 && items.push({ key, group: 'material', description, quantity, unit, ref });
   const lab = (key: string, description: string, hours: number, op: keyof BomRules['labourHours']) =>
     hours > 0 && items.push({ key, group: 'labour', description, quantity: round2(hours), unit: 'h', ref: { kind: 'labour', op } });
+  /** "2 shells × " in front of a per-shell quantity, nothing for one shell */
+  const times = N > 1 ? `${N} shells × ` : '';
+  /** " per shell" after a per-shell item, nothing for one shell */
+  const each = N > 1 ? ' per shell' : '';
 
-  mat('tubes', `Tubes ${d.tubeMaterial} ${tube.od} ${tube.wall}: ${n} × (${d.tubeLength_m} m + ${rules.tubeCutAllowance_m} m cut allowance)`,
-    round2(n * (d.tubeLength_m + rules.tubeCutAllowance_m)), 'm', { kind: 'tube', material: d.tubeMaterial, ...tube });
-  mat('tubesheets', `Tubesheets ${grades.tubesheets}: 2 × ⌀${mm(dts)} × ${mm(tts)} (estimating thickness; the code calculation sets the real one)`,
-    round2(2 * discMass(dts, tts, plateDensity(grades.tubesheets))), 'kg', { kind: 'plate', material: grades.tubesheets });
-  mat('baffles', `Baffles ${grades.baffles}: ${baffles} × segmental (0.8 of ⌀${mm(ds)}) × ${mm(tb)}`,
-    round2(baffles * BAFFLE_AREA_FRACTION * discMass(ds, tb, plateDensity(grades.baffles))), 'kg', { kind: 'plate', material: grades.baffles });
+  mat('tubes', `Tubes ${d.tubeMaterial} ${tube.od} ${tube.wall}: ${times}${n} × (${d.tubeLength_m} m + ${rules.tubeCutAllowance_m} m cut allowance)`,
+    round2(N * n * (d.tubeLength_m + rules.tubeCutAllowance_m)), 'm', { kind: 'tube', material: d.tubeMaterial, ...tube });
+  mat('tubesheets', `Tubesheets ${grades.tubesheets}: ${N > 1 ? `${2 * N} (2 per shell)` : '2'} × ⌀${mm(dts)} × ${mm(tts)} (estimating thickness; the code calculation sets the real one)`,
+    round2(2 * N * discMass(dts, tts, plateDensity(grades.tubesheets))), 'kg', { kind: 'plate', material: grades.tubesheets });
+  mat('baffles', `Baffles ${grades.baffles}: ${times}${baffles} × segmental (0.8 of ⌀${mm(ds)}) × ${mm(tb)}`,
+    round2(N * baffles * BAFFLE_AREA_FRACTION * discMass(ds, tb, plateDensity(grades.baffles))), 'kg', { kind: 'plate', material: grades.baffles });
   if (shell.kind === 'pipe') {
-    mat('shell', `Shell pipe ${shell.label}: ${round2(shellLen)} m between tubesheets`, round2(shellLen), 'm', { kind: 'shell-pipe', label: shell.label });
+    mat('shell', `Shell pipe ${shell.label}: ${times}${round2(shellLen)} m between tubesheets`, round2(N * shellLen), 'm', { kind: 'shell-pipe', label: shell.label });
   } else {
-    mat('shell', `Shell rolled from carbon-steel plate, ${shell.label} × ${mm(shell.wall_m)} wall, ${round2(shellLen)} m`,
-      round2(rolledShellMass(ds, shell.wall_m, shellLen)), 'kg', { kind: 'plate', material: 'carbon-steel' });
+    mat('shell', `Shell rolled from carbon-steel plate, ${shell.label} × ${mm(shell.wall_m)} wall, ${times}${round2(shellLen)} m`,
+      round2(N * rolledShellMass(ds, shell.wall_m, shellLen)), 'kg', { kind: 'plate', material: 'carbon-steel' });
   }
-  mat('heads', `Channel heads (bonnets) for a ${mm(ds)} shell`, 1, 'pair', { kind: 'heads', shellDiameter_m: ds });
-  mat('nozzles-tube', `Tube-side nozzles NPS ${noz.tube} class ${flangeClass} (in + out; by ${noz.basis})`, 2, 'each', { kind: 'nozzle', nps: noz.tube, rating: flangeClass });
-  mat('nozzles-shell', `Shell-side nozzles NPS ${noz.shell} class ${flangeClass} (in + out; by ${noz.basis})`, 2, 'each', { kind: 'nozzle', nps: noz.shell, rating: flangeClass });
+  mat('heads', `Channel heads (bonnets) for a ${mm(ds)} shell${N > 1 ? `, one pair per shell` : ''}`, N, 'pair', { kind: 'heads', shellDiameter_m: ds });
+  mat('nozzles-tube', `Tube-side nozzles NPS ${noz.tube} class ${flangeClass} (in + out${each}; by ${noz.basis})`, 2 * N, 'each', { kind: 'nozzle', nps: noz.tube, rating: flangeClass });
+  mat('nozzles-shell', `Shell-side nozzles NPS ${noz.shell} class ${flangeClass} (in + out${each}; by ${noz.basis})`, 2 * N, 'each', { kind: 'nozzle', nps: noz.shell, rating: flangeClass });
+  for (const c of interconnections(N)) {
+    const nps = c.side === 'tube' ? noz.tube : noz.shell;
+    mat(`interconnection-${c.from}-${c.to}-${c.side}`,
+      `Interconnection shell ${c.from} → ${c.to}, ${c.side} side: flanged spool NPS ${nps} class ${flangeClass}, two flanged ends priced as nozzles from the book's nozzle table`,
+      2, 'each', { kind: 'nozzle', nps, rating: flangeClass });
+  }
   const rods = tieRodCount(ds);
-  mat('tie-rods', `Tie rods: ${rods} × ${round2(shellLen)} m`, round2(rods * shellLen), 'm', { kind: 'sundry', item: 'tieRodPerMetre_minor' });
-  mat('gaskets', 'Gasket set (two head gaskets)', 1, 'set', { kind: 'sundry', item: 'gasketSet_minor' });
-  mat('bolting', 'Bolting set (studs and nuts of both heads)', 1, 'set', { kind: 'sundry', item: 'boltingSet_minor' });
-  mat('paint', 'Paint, outside of shell and heads', round2(paintArea_m2(ds, shell.wall_m, shellLen)), 'm²', { kind: 'sundry', item: 'paintPerM2_minor' });
+  mat('tie-rods', `Tie rods: ${times}${rods} × ${round2(shellLen)} m`, round2(N * rods * shellLen), 'm', { kind: 'sundry', item: 'tieRodPerMetre_minor' });
+  mat('gaskets', `Gasket set (two head gaskets)${N > 1 ? `, one set per shell` : ''}`, N, 'set', { kind: 'sundry', item: 'gasketSet_minor' });
+  mat('bolting', `Bolting set (studs and nuts of both heads)${N > 1 ? `, one set per shell` : ''}`, N, 'set', { kind: 'sundry', item: 'boltingSet_minor' });
+  mat('paint', `Paint, outside of shell and heads${N > 1 ? `, ${N} shells` : ''}`, round2(N * paintArea_m2(ds, shell.wall_m, shellLen)), 'm²', { kind: 'sundry', item: 'paintPerM2_minor' });
 
-  lab('labour-tube-ends', `Expand tube ends: 2 × ${n} ends × ${h.perTubeEnd} h`, 2 * n * h.perTubeEnd, 'perTubeEnd');
-  lab('labour-baffles', `Baffles: ${baffles} × ${h.perBaffle} h`, baffles * h.perBaffle, 'perBaffle');
-  lab('labour-nozzles', `Nozzles: 4 × ${h.perNozzle} h`, 4 * h.perNozzle, 'perNozzle');
-  lab('labour-fit-up', 'Fit-up and assembly', h.fitUp, 'fitUp');
-  lab('labour-hydrotest', 'Hydrostatic test', h.hydrotest, 'hydrotest');
-  lab('labour-paint', 'Painting', h.paint, 'paint');
+  lab('labour-tube-ends', `Expand tube ends: ${times}2 × ${n} ends × ${h.perTubeEnd} h`, N * 2 * n * h.perTubeEnd, 'perTubeEnd');
+  lab('labour-baffles', `Baffles: ${times}${baffles} × ${h.perBaffle} h`, N * baffles * h.perBaffle, 'perBaffle');
+  lab('labour-nozzles', `Nozzles: ${times}4 × ${h.perNozzle} h`, N * 4 * h.perNozzle, 'perNozzle');
+  const spools = interconnections(N).length;
+  lab('labour-interconnections', `Interconnecting spools: ${spools} × 2 flanged ends × ${h.perNozzle} h`, spools * 2 * h.perNozzle, 'perNozzle');
+  lab('labour-fit-up', `Fit-up and assembly${N > 1 ? `: ${N} shells × ${h.fitUp} h` : ''}`, N * h.fitUp, 'fitUp');
+  lab('labour-hydrotest', `Hydrostatic test${N > 1 ? `: ${N} shells × ${h.hydrotest} h (each shell, both sides)` : ''}`, N * h.hydrotest, 'hydrotest');
+  lab('labour-paint', `Painting${N > 1 ? `: ${N} shells × ${h.paint} h` : ''}`, N * h.paint, 'paint');
   return items;
 }

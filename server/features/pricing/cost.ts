@@ -4,23 +4,29 @@
  * without rounding, strings or line objects: the search calls it for every candidate. Nozzles are
  * sized by shell size here (a candidate has no rating yet). A candidate the book cannot price costs
  * Infinity, so it ranks last; this function never throws.
+ *
+ * Shells in series and baffles count as in the bill (bom.ts): N identical shells multiply every
+ * per-shell item and its labour, each neighbouring pair adds a flanged spool on each side (two
+ * nozzle-priced ends and their labour), and the baffles are those of the candidate's own spacing
+ * (bafflesPerShell), so the search ranks multi-shell and closely baffled designs at their price.
  */
 import type { PriceBook } from '../../../shared/schemas/price-book';
 import type { CostInput } from '../../../shared/thermal/cost-proxy';
 import { PIPE_SHELLS, tieRodCount, TUBE_SIZES } from '../../../shared/thermal/geometry';
 import {
-  BAFFLE_AREA_FRACTION, baffleCount, baffleThickness_m, nozzleNpsByShell, paintArea_m2, plateDensity,
+  BAFFLE_AREA_FRACTION, baffleThickness_m, nozzleNpsByShell, paintArea_m2, plateDensity,
   plateGrades, rolledShellMass, tubesheetDiameter_m, tubesheetThickness_m,
 } from './bom-rules';
 import { indexBook } from './book-index';
+import { bafflesPerShell, shellsOf, type TrainFields } from './design-fields';
 
 const tubeKey = (od: number, wall: number) => Math.round(od * 1e5) * 1e5 + Math.round(wall * 1e6);
 const shellKey = (ds: number) => Math.round(ds * 1e4);
 
 interface PlateCost { sheetPerKg: number; sheetRho: number; bafflePerKg: number; baffleRho: number }
-interface ShellCost { fixed: number; pipePerMetre?: number; wall: number; tts: number; sheetDiscArea: number; baffleDiscArea: number; rods: number }
+interface ShellCost { fixed: number; spool: number; pipePerMetre?: number; wall: number; tts: number; sheetDiscArea: number; baffleDiscArea: number; rods: number }
 
-export function costFromPriceBook(book: PriceBook): (d: CostInput) => number {
+export function costFromPriceBook(book: PriceBook): (d: CostInput & TrainFields) => number {
   const ix = indexBook(book);
   const s = book.sundries;
   const h = book.labourHours;
@@ -60,6 +66,8 @@ export function costFromPriceBook(book: PriceBook): (d: CostInput) => number {
       const dts = tubesheetDiameter_m(ds);
       c = {
         fixed: heads + 4 * nozzle + s.gasketSet_minor + s.boltingSet_minor,
+        // one interconnection: two flanged ends at the nozzle rate, and their labour
+        spool: 2 * nozzle + 2 * h.perNozzle * rate,
         // a pipe shell without a book row is unpriceable; a rolled shell is priced by plate mass
         pipePerMetre: pipe ? (ix.shellPipe(pipe.label) ?? Infinity) : undefined,
         wall: pipe?.wall_m ?? 0.01,
@@ -80,7 +88,8 @@ export function costFromPriceBook(book: PriceBook): (d: CostInput) => number {
     const c = shellCost(ds);
     const p = plateCost(d.tubeMaterial);
     const len = d.tubeLength_m - 2 * c.tts;
-    const baffles = baffleCount(d.tubeLength_m, d.baffleSpacing_m);
+    const baffles = bafflesPerShell(d);
+    const nShells = shellsOf(d);
     const wall = d.shellWall_m ?? c.wall;
     const shell = c.pipePerMetre === undefined ? rolledShellMass(ds, wall, len) * csPerKg : c.pipePerMetre * len;
     const material =
@@ -89,6 +98,7 @@ export function costFromPriceBook(book: PriceBook): (d: CostInput) => number {
       baffles * c.baffleDiscArea * baffleThickness_m(ds) * p.baffleRho * p.bafflePerKg +
       shell + c.fixed + c.rods * len * s.tieRodPerMetre_minor + paintArea_m2(ds, wall, len) * s.paintPerM2_minor;
     const labour = (2 * d.tubeCount * h.perTubeEnd + baffles * h.perBaffle) * rate + fixedLabour;
-    return (material + labour) * markup;
+    // N shells of one cost each, plus a spool per side between each pair of neighbours
+    return (nShells * (material + labour) + (nShells - 1) * 2 * c.spool) * markup;
   };
 }
