@@ -50,8 +50,9 @@ export function bafflesPerShell(d: TrainFields & { tubeLength_m: number }): numb
   const b = d.baffleSpacing_m;
   if (!b || b <= 0) return 0;
   if (d.inletBaffleSpacing_m !== undefined || d.outletBaffleSpacing_m !== undefined) {
+    // at least one baffle, as the engine's plan (shared/thermal/geometry/baffles.ts) counts
     const free = d.tubeLength_m - (d.inletBaffleSpacing_m ?? b) - (d.outletBaffleSpacing_m ?? b);
-    return free < 0 ? 0 : Math.floor(free / b + 1e-9) + 1;
+    return free < 0 ? 1 : Math.floor(free / b + 1e-9) + 1;
   }
   return Math.max(0, Math.round(d.tubeLength_m / b) - 1);
 }

@@ -61,7 +61,7 @@ export async function patchQuote(deps: QuoteDeps, user: SessionUser, id: string,
         quantity: next.quantity,
         currentRevision: number,
         priceTotalMinor: next.price.total_minor,
-        designSummary: designSummary(next.design),
+        designSummary: designSummary(next.design, next.duty),
         assigneeId: row.assigneeId ?? user.id,
       });
       if (!ok) throw stale();

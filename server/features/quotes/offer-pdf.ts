@@ -1,19 +1,23 @@
 /**
  * The offer PDF (issue 4): the fabricator's offer for one revision of a quote, with the duty in
- * the customer's units, the design, its predicted performance, the price as the fabricator chooses
- * to show it, payment, lead time, validity, terms and the engineering cautions of the domain brief.
+ * the customer's units, the design (which fluid goes where and why, shells in series, baffles), its
+ * predicted performance with the methods on a technical line (tube side; shell side by Bell–Delaware
+ * with Kern's h as a second opinion and the J factors), the price as the fabricator chooses to show
+ * it, payment, lead time, validity, terms and the engineering cautions of the domain brief.
  */
 import type { Revision } from '../../../shared/schemas/quotes';
 import { ENGINEERING_CAUTION } from '../../../shared/thermal/exchanger/checks';
 import { drawHeading, drawNoticeBox, drawParagraphs } from '../../lib/pdf/blocks';
-import { designPairs, materialName, methodSentence, performancePairs, tubeOdLabel } from '../../lib/pdf/design-rows';
+import { designPairs, designReasons, materialName, methodSentence, performancePairs, shellMethodSentence, tubeOdLabel } from '../../lib/pdf/design-rows';
 import { COLOR, CONTENT_WIDTH, PAGE, createPdf, ensureSpace, pdfToBuffer } from '../../lib/pdf/document';
 import { dutyRows, fluidName, limitPairs } from '../../lib/pdf/duty-rows';
 import { FONT } from '../../lib/pdf/fonts';
+import { latinStrings } from '../../lib/pdf/glyphs';
 import { drawPageFrames } from '../../lib/pdf/page-frame';
 import { paymentRows, priceRows } from '../../lib/pdf/price-rows';
 import { showQuantity } from '../../lib/pdf/quantities';
 import { drawFacts, drawTable, factsTable, tableKeepHeight, type TableOptions } from '../../lib/pdf/table';
+import { processSideOf, shellsOf } from '../pricing/design-fields';
 
 /** Everything the offer shows; the caller loads it (quote, revision, organisation, price book). */
 export interface OfferPdfInput {
@@ -90,16 +94,26 @@ function section(doc: PDFKit.PDFDocument, title: string, table: TableOptions, ex
 function drawEngineering(doc: PDFKit.PDFDocument, o: OfferPdfInput): void {
   const { duty, design } = o.revision;
   const system = o.units === 'SI' ? 'SI units' : 'US customary units';
+  // the duty's columns say where the design put each stream (a bath keeps the process in the tubes)
+  const onShell = processSideOf(design) === 'shell' && duty.boundary.kind === 'coolant';
+  const processWhere = onShell ? 'on the shell side' : 'in the tubes';
+  const coolantWhere = duty.boundary.kind === 'wall' ? 'bath' : onShell ? 'in the tubes' : 'shell';
   section(doc, `1  Duty (${system}; pressures are gauge)`, {
-    columns: [{ header: 'Item', weight: 26 }, { header: 'Process side (in the tubes)', weight: 40 }, { header: 'Cooling side (shell)', weight: 34 }],
+    columns: [{ header: 'Item', weight: 26 }, { header: `Process side (${processWhere})`, weight: 40 }, { header: `Cooling side (${coolantWhere})`, weight: 34 }],
     rows: dutyRows(duty, o.units),
   });
   doc.moveDown(0.5);
   drawTable(doc, factsTable(limitPairs(duty, o.units)));
-  section(doc, '2  Design', factsTable(designPairs(design, o.units)));
-  section(doc, '3  Predicted performance', factsTable(performancePairs(design, o.units)), 24);
+  const reasons = designReasons(design);
+  section(doc, '2  Design', factsTable(designPairs(design, o.units, duty)), reasons.length ? 40 : 0);
+  if (reasons.length) {
+    doc.moveDown(0.4);
+    drawParagraphs(doc, reasons, 9);
+  }
+  const methods = [methodSentence(design), shellMethodSentence(design, o.units)].filter((x): x is string => x !== undefined);
+  section(doc, '3  Predicted performance', factsTable(performancePairs(design, o.units)), 12 * methods.length + 12);
   doc.moveDown(0.4);
-  drawParagraphs(doc, [methodSentence(design)], 9);
+  drawParagraphs(doc, methods, 9);
   const r = design.rating;
   drawNoticeBox(doc, {
     title: 'Cautions',
@@ -111,7 +125,9 @@ function drawEngineering(doc: PDFKit.PDFDocument, o: OfferPdfInput): void {
 
 function drawCommercial(doc: PDFKit.PDFDocument, o: OfferPdfInput): void {
   const { price, design, leadTimeWeeks, validUntil } = o.revision;
-  const unitText = `Shell-and-tube cooler as section 2 (${design.tubeCount} × ${tubeOdLabel(design.tubeOuterDiameter_m, o.units)} ${materialName(design.tubeMaterial).toLowerCase()} tubes)`;
+  const n = shellsOf(design);
+  const tubes = `${design.tubeCount} × ${tubeOdLabel(design.tubeOuterDiameter_m, o.units)} ${materialName(design.tubeMaterial).toLowerCase()} tubes`;
+  const unitText = `Shell-and-tube cooler as section 2 (${n > 1 ? `${n} shells in series, ${tubes} each` : tubes})`;
   section(doc, '4  Price', {
     columns: [
       { header: 'Description', weight: 46 },
@@ -142,13 +158,15 @@ function drawAlternatives(doc: PDFKit.PDFDocument, o: OfferPdfInput): void {
   section(doc, `${o.terms.length > 0 ? 6 : 5}  Alternative designs (priced on request)`, {
     fontSize: 8.5,
     columns: [
-      { header: 'Tubes', weight: 24 },
-      { header: 'Material', weight: 20 },
-      { header: 'Layout', weight: 9 },
-      { header: 'Length', weight: 10, align: 'right' },
-      { header: 'Passes', weight: 8, align: 'right' },
-      { header: 'Shell', weight: 16 },
-      { header: 'Area', weight: 11, align: 'right' },
+      { header: 'Tubes (per shell)', weight: 22 },
+      { header: 'Material', weight: 16 },
+      { header: 'Layout', weight: 8 },
+      { header: 'Length', weight: 9, align: 'right' },
+      { header: 'Passes', weight: 7, align: 'right' },
+      { header: 'Shell', weight: 13 },
+      { header: 'Shells', weight: 7, align: 'right' },
+      { header: 'Process in', weight: 9 },
+      { header: 'Area', weight: 9, align: 'right' },
     ],
     rows: alts.map((a) => [
       `${a.tubeCount} × ${tubeOdLabel(a.tubeOuterDiameter_m, o.units)} OD, ${a.tubeWallLabel}`,
@@ -157,13 +175,17 @@ function drawAlternatives(doc: PDFKit.PDFDocument, o: OfferPdfInput): void {
       len(a.tubeLength_m),
       String(a.tubePasses),
       a.shellLabel ?? '–',
+      String(shellsOf(a)),
+      processSideOf(a) === 'shell' ? 'shell' : 'tubes',
       showQuantity(a.area_m2, 'area', o.units),
     ]),
   });
 }
 
 /** Renders the offer as an A4 PDF. */
-export async function renderOfferPdf(input: OfferPdfInput): Promise<Buffer> {
+export async function renderOfferPdf(raw: OfferPdfInput): Promise<Buffer> {
+  // signs the shipped font lacks (≈, ≥, →) in the engine's words become words it has
+  const input = latinStrings(raw);
   const r = input.revision;
   const title = `${KIND_TITLE[r.kind]} ${input.quote.number}, revision ${r.number}`;
   const doc = createPdf({

@@ -4,6 +4,8 @@ import type { PriceLine } from '../../../shared/schemas/price-book';
 import { tubeMaterial } from '../../../shared/thermal/geometry/materials';
 import { tubeSizeOf } from '../../../shared/thermal/geometry/tubes';
 import type { QuoteDetail, QuoteSummary, Revision } from '../../../shared/schemas/quotes';
+import type { SizeRequest } from '../../../shared/schemas/thermal';
+import { processSideOf, shellsOf } from '../pricing/design-fields';
 import { isStaff } from '../../lib/auth/guards';
 import type * as repo from './repository';
 
@@ -121,10 +123,28 @@ export function toDetail(
   };
 }
 
-/** `212 × 3/4 in BWG 16 Copper (C12200), 2.40 m, 2 passes, NPS 12 STD`: the catalogue's own labels. */
-export function designSummary(d: Revision['design']): string {
+/** A short name of the process fluid for one line: "oil", "glycol", "water", "air". */
+function fluidWord(duty?: Pick<SizeRequest, 'process'>): string {
+  const f = duty?.process.fluid;
+  if (typeof f !== 'string') return 'process fluid';
+  if (f.startsWith('oil')) return 'oil';
+  if (f.includes('glycol')) return 'glycol';
+  if (f.startsWith('air')) return 'air';
+  return f === 'water' ? 'water' : 'process fluid';
+}
+
+/**
+ * `212 × 3/4 in BWG 16 Copper (C12200), 2.40 m, 2 passes, NPS 12 STD`: the catalogue's own labels;
+ * then `, 2 shells in series` when there are several (tube count and length are per shell) and
+ * `, oil on the shell side` when the process is not in the tubes. Old stored designs read as one
+ * shell with the process in the tubes, so their summary is unchanged.
+ */
+export function designSummary(d: Revision['design'], duty?: Pick<SizeRequest, 'process'>): string {
   const od = tubeSizeOf(d.tubeOuterDiameter_m)?.label ?? `${(d.tubeOuterDiameter_m * 1000).toFixed(1)} mm`;
   const material = tubeMaterial(d.tubeMaterial)?.name ?? d.tubeMaterial;
   const passes = `${d.tubePasses} pass${d.tubePasses > 1 ? 'es' : ''}`;
-  return `${d.tubeCount} × ${od} ${d.tubeWallLabel} ${material}, ${d.tubeLength_m.toFixed(2)} m, ${passes}${d.shellLabel ? `, ${d.shellLabel}` : ''}`;
+  const n = shellsOf(d);
+  const shells = n > 1 ? `, ${n} shells in series` : '';
+  const side = processSideOf(d) === 'shell' ? `, ${fluidWord(duty)} on the shell side` : '';
+  return `${d.tubeCount} × ${od} ${d.tubeWallLabel} ${material}, ${d.tubeLength_m.toFixed(2)} m, ${passes}${d.shellLabel ? `, ${d.shellLabel}` : ''}${shells}${side}`;
 }

@@ -29,7 +29,7 @@ export async function submitQuote(
   const book = await activeBook(deps);
   const { design, alternatives } = await sizeWithBook(deps.config, input.duty, book);
   const price = priceWithBook(design, book, { quantity: input.quantity, needBy: input.needBy });
-  const summary = designSummary(design);
+  const summary = designSummary(design, input.duty);
   const store = () => deps.db.transaction(async (tx) => {
     const number = await repo.nextQuoteNumber(tx);
     const revision = buildRevision(1, 'budget', customer, input.duty, design, alternatives, price, book);
