@@ -26,10 +26,19 @@ export const COST_FIXED = 150;
 const STEEL_DENSITY = 7850; // kg/m³, carbon steel (handbook, memory)
 
 /** The part of a design the proxy reads (a full `Design` also fits). */
-export type CostInput = Pick<Design, 'tubeCount' | 'tubeLength_m' | 'tubeOuterDiameter_m' | 'tubeWall_m' | 'tubeMaterial' | 'shellInnerDiameter_m' | 'baffleSpacing_m'> & { shellWall_m?: number };
+export type CostInput = Pick<Design, 'tubeCount' | 'tubeLength_m' | 'tubeOuterDiameter_m' | 'tubeWall_m' | 'tubeMaterial' | 'shellInnerDiameter_m' | 'baffleSpacing_m'> & {
+  shellWall_m?: number;
+  /** identical shells (default 1): tube count, length and baffles are per shell */
+  shellsInSeries?: number;
+  baffleCut?: number;
+  /** per shell; default from the spacing */
+  baffleCount?: number;
+  processSide?: 'tubes' | 'shell';
+};
 
 /**
- * tube mass × material factor + shell pipe/plate mass + two tubesheets + tube ends + baffles + fixed.
+ * Per shell: tube mass × material factor + shell pipe/plate mass + two tubesheets + tube ends +
+ * baffles + fixed (heads, nozzles), times the shells in series.
  * Tubesheet thickness is taken as max(25 mm, 0.08 D_s) for the proxy only.
  */
 export function costProxy(d: CostInput): number {
@@ -41,6 +50,7 @@ export function costProxy(d: CostInput): number {
   const tw = d.shellWall_m ?? 0.008;
   const shellMass = Math.PI * (ds + tw) * tw * d.tubeLength_m * STEEL_DENSITY;
   const sheetMass = 2 * (Math.PI / 4) * ds * ds * Math.max(0.025, 0.08 * ds) * STEEL_DENSITY;
-  const baffles = d.baffleSpacing_m ? Math.max(0, Math.round(d.tubeLength_m / d.baffleSpacing_m) - 1) : 0;
-  return tubeMass * factor + shellMass + sheetMass + 2 * d.tubeCount * COST_PER_TUBE_END + baffles * COST_PER_BAFFLE + COST_FIXED;
+  const baffles = d.baffleCount ?? (d.baffleSpacing_m ? Math.max(0, Math.round(d.tubeLength_m / d.baffleSpacing_m) - 1) : 0);
+  const perShell = tubeMass * factor + shellMass + sheetMass + 2 * d.tubeCount * COST_PER_TUBE_END + baffles * COST_PER_BAFFLE + COST_FIXED;
+  return perShell * (d.shellsInSeries ?? 1);
 }

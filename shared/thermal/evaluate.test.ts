@@ -22,7 +22,7 @@ describe('evaluateDesign: a hand-chosen geometry against the duty', () => {
       const e = evaluateDesign(duty, {
         tubeCount: r.tubeCount, tubeLength_m: r.tubeLength_m, tubeOuterDiameter_m: r.tubeOuterDiameter_m, tubeWall_m: r.tubeWall_m,
         tubeMaterial: r.tubeMaterial, tubePasses: r.tubePasses, layout: r.layout!, shellInnerDiameter_m: r.shellInnerDiameter_m!,
-        baffleSpacing_m: r.baffleSpacing_m, tubePitch_m: r.tubePitch_m,
+        baffleSpacing_m: r.baffleSpacing_m, tubePitch_m: r.tubePitch_m, processSide: r.processSide, shellsInSeries: r.shellsInSeries, baffleCut: r.baffleCut,
       });
       expect(e.rating.outletTemp_C).toBeCloseTo(r.rating.outletTemp_C, 3);
       // the bisection's required length matches the search's closed form within 1 %

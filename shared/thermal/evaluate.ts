@@ -4,10 +4,13 @@
  * margin (over-surface) can be shown beside the hand-made design, exactly as for a sized one.
  * Pure; used by the server (authority) and by the workspace for an instant preview.
  */
-import type { Design, RateRequest, RateResult, SizeRequest } from '../schemas/thermal';
+import type { Design, ProcessSide, RateRequest, RateResult, SizeRequest } from '../schemas/thermal';
+import { allocationReason, foulingFor } from './allocation';
 import { costProxy, type CostInput } from './cost-proxy';
 import { ThermalInputError } from './errors';
 import { defaultBaffleSpacing } from './exchanger/shell-side';
+import { resolveStream } from './exchanger/streams';
+import { bafflePlan, DEFAULT_BAFFLE_CUT } from './geometry/baffles';
 import { STANDARD_SHELLS } from './geometry/shells';
 import { MIN_PITCH_RATIO, tubeSizeOf } from './geometry/tubes';
 import type { Layout } from './geometry/layout';
@@ -24,6 +27,12 @@ export interface GeometryChoice {
   shellInnerDiameter_m: number;
   baffleSpacing_m?: number;
   tubePitch_m?: number;
+  /** issue 10; absent on designs stored before it: process in the tubes, one shell, 25 % cut */
+  processSide?: ProcessSide;
+  shellsInSeries?: number;
+  baffleCut?: number;
+  inletBaffleSpacing_m?: number;
+  outletBaffleSpacing_m?: number;
 }
 
 /** The rate request that puts `g` under the duty's streams, boundary, fouling and correlation. */
@@ -31,6 +40,9 @@ export function rateRequestFor(duty: SizeRequest, g: GeometryChoice, length = g.
   const { outletTemp_C: _target, ...process } = duty.process;
   const pitch = g.tubePitch_m ?? MIN_PITCH_RATIO * g.tubeOuterDiameter_m;
   const b = duty.boundary;
+  const side = g.processSide ?? 'tubes';
+  // fouling per side as the search uses it: the request's values, else each fluid's default
+  const fouling = b.kind === 'coolant' ? foulingFor(duty, resolveStream(duty.process, 'process'), resolveStream(b, 'boundary'), side) : undefined;
   const boundary: RateRequest['boundary'] =
     b.kind === 'wall'
       ? b
@@ -38,10 +50,13 @@ export function rateRequestFor(duty: SizeRequest, g: GeometryChoice, length = g.
           ...b,
           shellInnerDiameter_m: g.shellInnerDiameter_m,
           baffleSpacing_m: g.baffleSpacing_m ?? b.baffleSpacing_m,
+          baffleCut: g.baffleCut ?? b.baffleCut,
+          inletBaffleSpacing_m: g.inletBaffleSpacing_m ?? b.inletBaffleSpacing_m,
+          outletBaffleSpacing_m: g.outletBaffleSpacing_m ?? b.outletBaffleSpacing_m,
           tubePitch_m: pitch,
           layout: g.layout,
-          foulingInside_m2K_W: duty.constraints.foulingInside_m2K_W ?? b.foulingInside_m2K_W,
-          foulingOutside_m2K_W: duty.constraints.foulingOutside_m2K_W ?? b.foulingOutside_m2K_W,
+          foulingInside_m2K_W: fouling!.inside,
+          foulingOutside_m2K_W: fouling!.outside,
         };
   return {
     process,
@@ -54,8 +69,11 @@ export function rateRequestFor(duty: SizeRequest, g: GeometryChoice, length = g.
       tubePasses: g.tubePasses,
       roughness_m: 1.5e-6,
       tubeMaterial: g.tubeMaterial,
+      processSide: side,
+      shellsInSeries: g.shellsInSeries ?? 1,
     },
     correlation: duty.correlation,
+    shellMethod: duty.shellMethod,
   };
 }
 
@@ -117,7 +135,21 @@ export function evaluateDesign(duty: SizeRequest, g: GeometryChoice, costOf: (d:
     shellInnerDiameter_m: g.shellInnerDiameter_m,
     shellLabel: shellLabel(g.shellInnerDiameter_m),
     baffleSpacing_m: g.baffleSpacing_m ?? defaultBaffleSpacing(g.shellInnerDiameter_m, g.tubeLength_m),
+    processSide: g.processSide ?? 'tubes',
+    shellsInSeries: g.shellsInSeries ?? 1,
+    ...(duty.boundary.kind === 'coolant'
+      ? {
+          baffleCut: g.baffleCut ?? DEFAULT_BAFFLE_CUT,
+          baffleCount: rating.baffleCount ?? bafflePlan(g.tubeLength_m, g.baffleSpacing_m ?? defaultBaffleSpacing(g.shellInnerDiameter_m, g.tubeLength_m), g.shellInnerDiameter_m).count,
+          inletBaffleSpacing_m: rating.inletBaffleSpacing_m,
+          outletBaffleSpacing_m: rating.outletBaffleSpacing_m,
+        }
+      : {}),
   };
+  const allocation =
+    duty.boundary.kind === 'coolant'
+      ? allocationReason(resolveStream(duty.process, 'process'), resolveStream(duty.boundary, 'boundary'), { side: base.processSide, tubeH: rating.htc_W_m2K, shellH: rating.shellHtc_W_m2K ?? 0, tubeRe: rating.reynolds })
+      : 'The process is in the tubes: a wall boundary (a bath or a condensing/boiling shell side) cools the tubes.';
   return {
     ...base,
     area_m2: rating.area_m2,
@@ -125,6 +157,7 @@ export function evaluateDesign(duty: SizeRequest, g: GeometryChoice, costOf: (d:
     requiredLength_m: reachable ? required : g.tubeLength_m * 100,
     overSurface_pct: reachable ? (g.tubeLength_m / required - 1) * 100 : -100,
     cost: costOf(base),
+    allocationReason: allocation,
     rating,
   };
 }

@@ -1,8 +1,11 @@
 /**
  * Rating: a given geometry → outlet temperatures, duty, pressure drops (issue 3, `POST /api/thermal/rate`).
  *
- * The product sizes coolers: the tube-side process stream is the hot one. A wall or coolant at or
- * above the process inlet (a heating duty) is refused with `not-a-cooler` rather than computed.
+ * The product sizes coolers: the process stream is the hot one, in the tubes (default) or on the
+ * shell side (`geometry.processSide`), in one to four shells in series. A wall boundary keeps the
+ * process in the tubes. A wall or coolant at or above the process inlet (a heating duty) is refused
+ * with `not-a-cooler` rather than computed. Fouling given on the boundary is per side (inside = tube
+ * side, outside = shell side, whichever fluid is there); absent, the rating is clean.
  */
 import type { RateRequest, RateRequestInput, RateResult } from '../schemas/thermal';
 import { rateRequestSchema } from '../schemas/thermal';
@@ -10,6 +13,7 @@ import { ThermalInputError } from './errors';
 import { rateCoolant } from './exchanger/rate-coolant';
 import { rateWall, type RateOptions } from './exchanger/rate-wall';
 import { defaultBaffleSpacing, type ShellGeometry } from './exchanger/shell-side';
+import { DEFAULT_BAFFLE_CUT } from './geometry/baffles';
 import { requireFinite, resolveStream, type Stream } from './exchanger/streams';
 import type { Bundle } from './exchanger/tube-side';
 import { MIN_PITCH_RATIO } from './geometry/tubes';
@@ -41,7 +45,7 @@ export function requireCooling(processInlet_C: number, sinkTemp_C: number, sinkF
     throw new ThermalInputError(
       'not-a-cooler',
       `The process enters at ${processInlet_C} °C, not above the ${what} at ${sinkTemp_C} °C: nothing would be cooled. ` +
-        'This engine sizes coolers; the tube-side process stream must be the hot one.',
+        'This engine sizes coolers; the process stream must be the hot one.',
       sinkField,
     );
   }
@@ -62,7 +66,10 @@ export function shellOf(cb: Coolant, b: Bundle): ShellGeometry {
     if (!fits) throw new ThermalInputError('no-shell', `No standard shell up to 1.5 m holds ${b.count} tubes of this size and pitch; give shellInnerDiameter_m.`, 'geometry.tubeCount');
     dShell = fits.innerDiameter_m;
   }
-  return { dShell, baffleSpacing: cb.baffleSpacing_m ?? defaultBaffleSpacing(dShell, b.length), baffleCut: cb.baffleCut ?? 0.25, pitch, layout };
+  return {
+    dShell, baffleSpacing: cb.baffleSpacing_m ?? defaultBaffleSpacing(dShell, b.length), baffleCut: cb.baffleCut ?? DEFAULT_BAFFLE_CUT, pitch, layout,
+    inletSpacing: cb.inletBaffleSpacing_m, outletSpacing: cb.outletBaffleSpacing_m,
+  };
 }
 
 /** Rates a parsed request (`rateRequestSchema` output). Throws ThermalInputError for impossible input. */
@@ -70,6 +77,12 @@ export function rateParsed(req: RateRequest, opts: RateOptions = {}): RateResult
   const s: Stream = resolveStream(req.process, 'process');
   const b = bundleOf(req.geometry);
   if (req.boundary.kind === 'wall') {
+    if (req.geometry.processSide === 'shell') {
+      throw new ThermalInputError('wall-needs-tubes', 'A wall boundary (a bath or a condensing/boiling shell side) cools the tubes: the process must be in the tubes.', 'geometry.processSide');
+    }
+    if ((req.geometry.shellsInSeries ?? 1) > 1) {
+      throw new ThermalInputError('wall-one-bundle', 'A wall boundary rates one bundle; shells in series need a coolant.', 'geometry.shellsInSeries');
+    }
     requireFinite(req.boundary.wallTemp_C, 'boundary.wallTemp_C', 'The wall temperature');
     requireCooling(s.inletTemp_C, req.boundary.wallTemp_C, 'boundary.wallTemp_C', 'wall');
     s.properties(s.inletTemp_C);
@@ -80,9 +93,14 @@ export function rateParsed(req: RateRequest, opts: RateOptions = {}): RateResult
   s.properties(s.inletTemp_C);
   c.properties(c.inletTemp_C);
   const shell = shellOf(req.boundary, b);
-  const r = rateCoolant(s, c, b, shell, { inside: req.boundary.foulingInside_m2K_W ?? 0, outside: req.boundary.foulingOutside_m2K_W ?? 0 }, req.correlation, opts);
+  const holds = tubeCountInShell({ shellInnerDiameter_m: shell.dShell, tubeOuterDiameter_m: b.dOuter, tubePitch_m: shell.pitch, layout: shell.layout, tubePasses: b.passes });
+  const r = rateCoolant(s, c, b, shell, { inside: req.boundary.foulingInside_m2K_W ?? 0, outside: req.boundary.foulingOutside_m2K_W ?? 0 }, req.correlation, opts, {
+    processSide: req.geometry.processSide ?? 'tubes',
+    shells: req.geometry.shellsInSeries ?? 1,
+    method: req.shellMethod,
+    holds: holds >= b.count ? holds : undefined,
+  });
   if (req.boundary.shellInnerDiameter_m !== undefined) {
-    const holds = tubeCountInShell({ shellInnerDiameter_m: shell.dShell, tubeOuterDiameter_m: b.dOuter, tubePitch_m: shell.pitch, layout: shell.layout, tubePasses: b.passes });
     if (holds < b.count) r.warnings.push({ code: 'shell-too-small', message: `A ${Math.round(shell.dShell * 1000)} mm shell holds ${holds} tubes at this pitch and layout, fewer than the ${b.count} rated.` });
   }
   return r;

@@ -56,11 +56,7 @@ export function dutyContext(req: SizeRequest): DutyContext {
   const cold = c.properties(tCm);
   const ch = s.massFlow_kg_s * cpEff;
   const cc = c.massFlow_kg_s * cold.specificHeat;
-  const fouling = {
-    inside: req.constraints.foulingInside_m2K_W ?? b.foulingInside_m2K_W ?? 0,
-    outside: req.constraints.foulingOutside_m2K_W ?? b.foulingOutside_m2K_W ?? 0,
-  };
-  return { ...base, coolant: { c, tCin: c.inletTemp_C, tCout, tCm, cold, coldAt: roundedCache(c), fouling, ch, cc, cmin: Math.min(ch, cc), cr: Math.min(ch, cc) / Math.max(ch, cc) } };
+  return { ...base, coolant: { c, tCin: c.inletTemp_C, tCout, tCm, cold, coldAt: roundedCache(c), ch, cc, cmin: Math.min(ch, cc), cr: Math.min(ch, cc) / Math.max(ch, cc) } };
 }
 
 /**

@@ -14,8 +14,8 @@ function rateAt(req: { process: typeof process | typeof oil; boundary: object },
   const boundary = req.boundary as typeof coolant | { kind: 'wall'; wallTemp_C: number };
   return rate({
     process: proc,
-    boundary: boundary.kind === 'coolant' ? { ...boundary, shellInnerDiameter_m: d.shellInnerDiameter_m, layout: d.layout, tubePitch_m: d.tubePitch_m, baffleSpacing_m: d.baffleSpacing_m } : boundary,
-    geometry: { tubeOuterDiameter_m: d.tubeOuterDiameter_m, tubeWall_m: d.tubeWall_m, tubeCount: d.tubeCount, tubeLength_m: length, tubePasses: d.tubePasses, tubeMaterial: d.tubeMaterial as 'copper' },
+    boundary: boundary.kind === 'coolant' ? { ...boundary, shellInnerDiameter_m: d.shellInnerDiameter_m, layout: d.layout, tubePitch_m: d.tubePitch_m, baffleSpacing_m: d.baffleSpacing_m, baffleCut: d.baffleCut } : boundary,
+    geometry: { tubeOuterDiameter_m: d.tubeOuterDiameter_m, tubeWall_m: d.tubeWall_m, tubeCount: d.tubeCount, tubeLength_m: length, tubePasses: d.tubePasses, tubeMaterial: d.tubeMaterial as 'copper', processSide: d.processSide, shellsInSeries: d.shellsInSeries },
   });
 }
 
@@ -28,16 +28,22 @@ describe('sizing invariants (issue 3)', () => {
     it(`${name}: unrounded length meets the target within 0.05 K; the rounded design is on the safe side`, () => {
       const r = size(req);
       expect(r.evaluated).toBeGreaterThan(100);
+      // issue 10: on the shell side Bell–Delaware's end-zone correction J_s steps with the whole number of
+      // baffles, so the outlet steps by up to ~0.1 K as the length crosses a baffle; a wall boundary stays exact
+      const tol = req.boundary.kind === 'coolant' ? 0.15 : 0.05;
       for (const d of r.candidates.slice(0, 5)) {
-        expect(Math.abs(rateAt(req, d, d.requiredLength_m).outletTemp_C - req.process.outletTemp_C)).toBeLessThan(0.05);
+        expect(Math.abs(rateAt(req, d, d.requiredLength_m).outletTemp_C - req.process.outletTemp_C)).toBeLessThan(tol);
         expect(d.rating.outletTemp_C).toBeLessThanOrEqual(req.process.outletTemp_C);
         expect(d.tubeLength_m).toBeGreaterThanOrEqual(d.requiredLength_m);
         expect(d.overSurface_pct).toBeGreaterThanOrEqual(0);
         expect(d.rating.pressureDrop.total_Pa).toBeLessThanOrEqual(req.constraints.maxPressureDrop_Pa);
         expect(d.tubeLength_m).toBeLessThanOrEqual(req.constraints.maxTubeLength_m);
       }
-      const costs = r.candidates.map((d) => d.cost);
-      expect(costs).toEqual([...costs].sort((a, b) => a - b));
+      // issue 10: candidates span the trade-offs (no longer in cost order); the recommended one is
+      // the cheapest of those inside the velocity windows, and no design appears twice
+      const clean = r.candidates.filter((d) => !d.rating.warnings.some((w) => /velocity-(low|high)$/.test(w.code)));
+      if (clean.length) expect(r.recommended.cost).toBeLessThanOrEqual(Math.min(...clean.map((d) => d.cost)) + 1e-9);
+      expect(r.candidates[0]).toBe(r.recommended);
     });
   }
 

@@ -1,205 +1,197 @@
 /**
- * Sizing (issue 3, `POST /api/thermal/size`): search tube OD × wall × material × layout × passes ×
- * shell (tube count = what the shell's laid-out tubesheet holds, shells chosen from the velocity
- * window), solve each candidate's required length, round it up to the shop's length step, rate the
- * rounded design, keep those within every limit and rank them by a cost function.
- *
- * Speed: required lengths are closed-form in NTU with a short fixed point for entrance effects;
- * only candidates that pass the limits on the solved length are rated, cheapest first, until
- * `maxCandidates` rated designs are kept.
+ * Sizing (`POST /api/thermal/size`): the enumeration in size-search.ts (process side × passes ×
+ * tube OD × layout × wall × shell × baffle spacing × material × shells in series, lengths solved in
+ * closed form, limits on both sides), then only the best few per allocation × shells and the
+ * trade-off extremes are refined (baffle cut 20–35 %) and rated; the rated designs are ranked by
+ * the cost function (with a soft penalty for velocities outside their windows), de-duplicated, and
+ * the recommended one says why it and its allocation won.
  */
-import type { Design, SizeRequest, SizeRequestInput, SizeResult } from '../schemas/thermal';
+import type { Design, ProcessSide, SizeRequest, SizeRequestInput, SizeResult } from '../schemas/thermal';
 import { sizeRequestSchema } from '../schemas/thermal';
+import { allocationReason, processSides } from './allocation';
 import { costProxy, type CostInput } from './cost-proxy';
 import { ThermalInputError, type ThermalWarning } from './errors';
-import { ntuCounterflow, ntuFromEffectiveness } from './exchanger/effectiveness';
-import { MIN_LMTD_CORRECTION, rateCoolant } from './exchanger/rate-coolant';
+import { prepareFor, rateCoolant } from './exchanger/rate-coolant';
 import { rateWall } from './exchanger/rate-wall';
-import { requiredLengthCoolant, requiredLengthWall, type DutyContext } from './exchanger/required-length';
-import { defaultBaffleSpacing, shellPressureDropKern, shellSideKern, type ShellGeometry } from './exchanger/shell-side';
-import { tubePressureDrop, type Bundle } from './exchanger/tube-side';
-import { tubeCountInShell, type Layout } from './geometry/layout';
-import { tubeMaterial } from './geometry/materials';
-import { STANDARD_SHELLS } from './geometry/shells';
-import { BWG_WALL_M, DEFAULT_SEARCH_ODS_M, MIN_PITCH_RATIO, tubeSizeOf } from './geometry/tubes';
-import { dutyContext, velocityWindow } from './size-duty';
+import { requiredLengthCoolant, type DutyContext } from './exchanger/required-length';
+import { shellMethod } from './exchanger/shell-methods';
+import { SHELL_ASPECT } from './exchanger/shell-side';
+import { bafflePlan, SEARCH_BAFFLE_CUTS } from './geometry/baffles';
+import { dutyContext } from './size-duty';
+import { distinct, distinctKey, spanning } from './size-pick';
+import { search, searchShells, WINDOW_PENALTY, type Pre, type Reason, type SearchState } from './size-search';
 
 export interface SizeOptions {
   /** ranks feasible designs, lower is better; default `costProxy` */
   costOf?: (design: CostInput) => number;
   /** shop's length increment, m; default 0.1 m (request's `constraints.lengthStep_m` wins) */
   lengthStep_m?: number;
-  /** rated designs returned in `candidates`; default 25 */
+  /** distinct designs returned in `candidates`; default 12 */
   maxCandidates?: number;
 }
 
 /** 0.1 m: default length step, a common cut-length increment for tube bundles (common practice). */
 export const DEFAULT_LENGTH_STEP_M = 0.1;
-const DEFAULT_MATERIALS = ['carbon-steel', 'stainless-304', 'copper', 'cuni-90-10'];
-const DEFAULT_LAYOUTS: Layout[] = [30, 60, 90, 45];
-const DEFAULT_PASSES = [1, 2, 4];
+/** 12: alternatives returned by default (enough to span the trade-offs, few enough to read). */
+const DEFAULT_MAX_CANDIDATES = 12;
 
-type Reason = 'length' | 'pressure-drop' | 'shell-pressure-drop' | 'lmtd-correction' | 'shell-size';
 const RELAX: Record<Reason, [string, string]> = {
-  length: ['constraints.maxTubeLength_m', 'the maximum tube length (or allow larger shells / more tubes)'],
+  length: ['constraints.maxTubeLength_m', 'the maximum tube length (or allow larger shells, more tubes or more shells in series)'],
   'pressure-drop': ['constraints.maxPressureDrop_Pa', 'the tube-side pressure-drop limit (or allow larger tubes / fewer passes)'],
-  'shell-pressure-drop': ['constraints.maxShellPressureDrop_Pa', 'the shell-side pressure-drop limit (or lower the coolant flow)'],
-  'lmtd-correction': ['constraints.tubePasses', 'the pass arrangement: allow 1 tube pass (counterflow), or accept a larger temperature approach'],
+  'shell-pressure-drop': ['constraints.maxShellPressureDrop_Pa', 'the shell-side pressure-drop limit (it defaults to the tube-side limit), or lower the shell-side flow'],
+  'lmtd-correction': ['constraints.tubePasses', 'the pass arrangement: allow 1 tube pass (counterflow) or more shells in series, or accept a larger temperature approach'],
   'shell-size': ['constraints.maxShellInnerDiameter_m', 'the maximum shell diameter'],
+  'shell-aspect': ['constraints.maxTubeLength_m', `the length: one shell's tube length over its diameter stays within ${SHELL_ASPECT[0]}–${SHELL_ASPECT[1]} (common practice); allow longer tubes or more shells in series`],
 };
-
-interface Pre {
-  cost: number;
-  input: CostInput & { tubePasses: number; layout: Layout; tubePitch_m: number; shellLabel: string; tubeWallLabel: string };
-  bundle: Bundle;
-  shell?: ShellGeometry;
-  requiredLength: number;
-}
 
 export function sizeParsed(req: SizeRequest, opts: SizeOptions = {}): SizeResult {
   const c = req.constraints;
   const ctx = dutyContext(req);
-  const step = c.lengthStep_m ?? opts.lengthStep_m ?? DEFAULT_LENGTH_STEP_M;
-  const costOf = opts.costOf ?? costProxy;
-  const window = velocityWindow(ctx.s, ctx.bulk.density);
-  const shells = STANDARD_SHELLS.filter((sh) => sh.innerDiameter_m <= (c.maxShellInnerDiameter_m ?? Infinity));
-  if (shells.length === 0) throw new ThermalInputError('no-feasible-design', 'No standard shell is as small as the maximum shell diameter.', 'constraints.maxShellInnerDiameter_m');
-  const reasons: Record<Reason, number> = { length: 0, 'pressure-drop': 0, 'shell-pressure-drop': 0, 'lmtd-correction': 0, 'shell-size': 0 };
-  let pre: Pre[] = [];
-  let evaluated = 0;
-  const warnings: ThermalWarning[] = [];
-  // the velocity window first; if nothing fits, slower tubes (more of them) before giving up
-  const counts = new Map<string, (i: number) => number>();
-  /** tube counts of each shell for this tube field, divisible by the passes, laid out on first use */
-  const countsFor = (od: number, pitch: number, layout: Layout, passes: number) => {
-    const key = `${od}|${layout}|${passes}`;
-    let f = counts.get(key);
-    if (!f) {
-      const memo = new Int32Array(shells.length).fill(-1);
-      f = (i: number) => {
-        if (memo[i]! < 0) memo[i] = Math.floor(tubeCountInShell({ shellInnerDiameter_m: shells[i]!.innerDiameter_m, tubeOuterDiameter_m: od, tubePitch_m: pitch, layout, tubePasses: passes }) / passes) * passes;
-        return memo[i]!;
-      };
-      counts.set(key, f);
-    }
-    return f;
+  const st: SearchState = {
+    req, ctx, step: c.lengthStep_m ?? opts.lengthStep_m ?? DEFAULT_LENGTH_STEP_M, costOf: opts.costOf ?? costProxy,
+    reasons: { length: 0, 'pressure-drop': 0, 'shell-pressure-drop': 0, 'lmtd-correction': 0, 'shell-size': 0, 'shell-aspect': 0 }, evaluated: 0, pre: [],
   };
+  if (searchShells(req).length === 0) {
+    throw new ThermalInputError('no-feasible-design', 'No standard shell is as small as the maximum shell diameter.', 'constraints.maxShellInnerDiameter_m');
+  }
+  const alloc = processSides(req, ctx.s);
+  const warnings: ThermalWarning[] = [];
+  const counts = new Map<string, (i: number) => number>();
+  // the velocity window first; if nothing fits, slower tubes (more of them) before giving up
   let prevScale = Infinity;
   for (const lowScale of [1, 0.5, 0.25, 0.1]) {
-    search(lowScale, prevScale);
+    search(st, alloc.sides, lowScale, prevScale, counts);
     prevScale = lowScale;
-    if (pre.length > 0) {
+    if (st.pre.length > 0) {
       if (lowScale < 1) warnings.push({ code: 'velocity-window-relaxed', message: `No design inside the tube velocity window met the limits; the search allowed velocities down to ${Math.round(lowScale * 100)} % of the window's lower end (expect more fouling).` });
       break;
     }
   }
-  function search(lowScale: number, prevScale: number) {
-    const ntuFor = (passes: number) => {
-      if (!ctx.coolant) return ctx.wall!.ntu;
-      const k = ctx.coolant;
-      const eps = (ctx.s.massFlow_kg_s * ctx.cpEff * (ctx.tIn - ctx.tOut)) / (k.cmin * (ctx.tIn - k.tCin));
-      return ntuFromEffectiveness(eps, k.cr, passes);
-    };
-    for (const passes of c.tubePasses ?? DEFAULT_PASSES) {
-      const ntu = ntuFor(passes);
-      if (ctx.coolant && passes > 1) {
-        const eps = (ctx.s.massFlow_kg_s * ctx.cpEff * (ctx.tIn - ctx.tOut)) / (ctx.coolant.cmin * (ctx.tIn - ctx.coolant.tCin));
-        const f = Number.isFinite(ntu) ? ntuCounterflow(eps, ctx.coolant.cr) / ntu : 0;
-        if (f < MIN_LMTD_CORRECTION) { reasons['lmtd-correction']++; continue; }
-      }
-      for (const od of c.tubeOuterDiameters_m ?? DEFAULT_SEARCH_ODS_M) {
-        const walls = tubeSizeOf(od)?.walls ?? [14, 16, 18].map((g) => ({ label: `BWG ${g}`, wall_m: BWG_WALL_M[g]! }));
-        const pitch = MIN_PITCH_RATIO * od;
-        for (const layout of c.layouts ?? DEFAULT_LAYOUTS) {
-          for (const wall of walls) {
-            const dInner = od - 2 * wall.wall_m;
-            if (dInner <= 0) continue;
-            const fitting = shellsInWindow(shells, countsFor(od, pitch, layout, passes), passes, dInner, window, lowScale, prevScale);
-            if (fitting.length === 0) { reasons['shell-size']++; continue; }
-            for (const { sh, count } of fitting) {
-              const shell = ctx.coolant ? { dShell: sh.innerDiameter_m, baffleSpacing: defaultBaffleSpacing(sh.innerDiameter_m, c.maxTubeLength_m), baffleCut: 0.25, pitch, layout } : undefined;
-              const shellH0 = shell ? shellSideKern(shell, od, ctx.coolant!.c.massFlow_kg_s, ctx.coolant!.cold, ctx.coolant!.cold.viscosity).h : 0;
-              let guess = 3;
-              for (const matId of c.materials ?? DEFAULT_MATERIALS) {
-                const mat = tubeMaterial(matId)!;
-                const bundle: Bundle = { dOuter: od, dInner, count, length: guess, passes, roughness: 1.5e-6, kWall: mat.conductivity, copperAlloy: mat.copperAlloy };
-                evaluated++;
-                const required = shell ? requiredLengthCoolant(ctx, bundle, shell, ntu, shellH0) : requiredLengthWall(ctx, bundle);
-                if (Number.isFinite(required)) guess = required;
-                const length = Math.round(Math.ceil(required / step - 1e-9) * step * 1e9) / 1e9;
-                if (!(length <= c.maxTubeLength_m + 1e-9)) { reasons.length++; continue; }
-                bundle.length = length;
-                if (tubePressureDrop(bundle, ctx.s.massFlow_kg_s, ctx.bulk).total_Pa > c.maxPressureDrop_Pa) { reasons['pressure-drop']++; continue; }
-                if (shell && c.maxShellPressureDrop_Pa !== undefined) {
-                  const k = ctx.coolant!;
-                  const side = shellSideKern(shell, od, k.c.massFlow_kg_s, k.cold, k.cold.viscosity);
-                  if (shellPressureDropKern(shell, side, length, k.cold, k.cold.viscosity) > c.maxShellPressureDrop_Pa) { reasons['shell-pressure-drop']++; continue; }
-                }
-                const input = { tubeCount: count, tubeLength_m: length, tubeOuterDiameter_m: od, tubeWall_m: wall.wall_m, tubeWallLabel: wall.label, tubeMaterial: matId, shellInnerDiameter_m: sh.innerDiameter_m, shellWall_m: sh.wall_m, shellLabel: sh.label, baffleSpacing_m: shell?.baffleSpacing, tubePasses: passes, layout, tubePitch_m: pitch };
-                pre.push({ cost: costOf(input), input, bundle, shell, requiredLength: required });
-              }
-            }
-          }
-        }
-      }
-    }
+  const maxKeep = opts.maxCandidates ?? DEFAULT_MAX_CANDIDATES;
+  const pick = (p: Pre) => ({ rank: p.rank, cost: p.cost, side: p.input.processSide, shells: p.input.shellsInSeries, tubeDp: p.tubeDp, shellDp: p.shellDp, length: p.input.tubeLength_m, key: distinctKey(p.input), p });
+  const toRate = spanning(distinct(st.pre.map(pick)), Math.max(maxKeep * 2, 24), 3);
+  const rated: { d: Design; rank: number; key: string }[] = [];
+  for (const { p } of toRate) {
+    const d = rateCandidate(st, refineCut(st, p));
+    if (!d) continue;
+    const findings = d.rating.warnings.filter((w) => /velocity-(low|high)$/.test(w.code)).length;
+    rated.push({ d, rank: d.cost + Math.abs(d.cost) * WINDOW_PENALTY * findings, key: distinctKey(d) });
   }
-  pre.sort((a, b) => a.cost - b.cost);
-  const maxKeep = opts.maxCandidates ?? 25;
-  const designs: Design[] = [];
-  for (const p of pre) {
-    if (designs.length >= maxKeep) break;
-    const d = rateCandidate(req, ctx, p, step);
-    if (d) designs.push(d);
-  }
-  if (designs.length === 0) throw noFeasible(reasons, evaluated);
-  if (designs[0]!.rating.warnings.length) warnings.push(...designs[0]!.rating.warnings);
-  return { recommended: designs[0]!, candidates: designs, evaluated, feasible: pre.length, warnings };
+  if (rated.length === 0) throw noFeasible(st.reasons, st.evaluated);
+  const sorted = distinct(rated).map((r) => ({ ...r, side: r.d.processSide ?? 'tubes', shells: r.d.shellsInSeries ?? 1, cost: r.d.cost, tubeDp: r.d.rating.pressureDrop.total_Pa, shellDp: r.d.rating.shellPressureDrop_Pa ?? 0, length: r.d.tubeLength_m }));
+  const chosen = spanning(sorted, maxKeep).map((r) => r.d);
+  explain(ctx, chosen, alloc.rule, sorted.map((r) => r.d));
+  const recommended = chosen[0]!;
+  if (recommended.rating.warnings.length) warnings.push(...recommended.rating.warnings);
+  return { recommended, candidates: chosen, evaluated: st.evaluated, feasible: st.pre.length, warnings };
 }
-
-type ShellList = typeof STANDARD_SHELLS;
 
 /**
- * Shells whose laid-out tube count gives tube velocities inside the window widened to `lowScale`
- * of its lower end, leaving out those already offered at `prevScale`.
+ * Baffle cut for a candidate about to be rated: each searched cut (20–35 %) at its spacing and
+ * rounded length; the one giving the shortest bundle within the shell-side limit wins (ties: the
+ * lower shell ΔP).
  */
-function shellsInWindow(shells: ShellList, countOf: (i: number) => number, passes: number, dInner: number, w: { nMin: (a: number) => number; nMax: (a: number) => number }, lowScale: number, prevScale: number) {
-  const area = (Math.PI * dInner * dInner) / 4;
-  const nMin = Math.max(passes, w.nMin(area) * passes);
-  const nMax = (w.nMax(area) / lowScale) * passes;
-  const nPrev = (w.nMax(area) / prevScale) * passes;
-  const out: { sh: ShellList[number]; count: number }[] = [];
-  for (let i = 0; i < shells.length; i++) {
-    const count = countOf(i);
-    if (count > nMax) {
-      // too slow even in the smallest shell that holds enough: offer that one shell once
-      if (out.length === 0 && prevScale === Infinity && count >= nMin && (i === 0 || countOf(i - 1) < nMin)) out.push({ sh: shells[i]!, count });
-      break;
+function refineCut(st: SearchState, p: Pre): Pre {
+  if (!p.shell || !p.view) return p;
+  const c = st.req.constraints;
+  const maxShellDp = c.maxShellPressureDrop_Pa ?? c.maxPressureDrop_Pa;
+  const method = shellMethod(st.req.shellMethod);
+  const n = p.input.shellsInSeries;
+  let best = p;
+  let bestLen = Infinity;
+  let bestDp = Infinity;
+  for (const cut of SEARCH_BAFFLE_CUTS) {
+    const shell = { ...p.shell, baffleCut: cut };
+    // the shell side at the length it will need (baffle count and end zones follow the length), twice
+    let side = method.rate(prepareFor(p.bundle, shell), p.view.shell.massFlow_kg_s, p.view.shellBulk, p.view.shellBulk.viscosity);
+    let r = requiredLengthCoolant(st.ctx, p.view, p.bundle, p.ntu, n, side.h);
+    if (!Number.isFinite(r.length)) continue;
+    // the baffle count is whole, so h steps with the length: iterate to a consistent pair (the longer on a step)
+    for (let it = 0; it < 4; it++) {
+      side = method.rate(prepareFor({ ...p.bundle, length: r.length }, shell), p.view.shell.massFlow_kg_s, p.view.shellBulk, p.view.shellBulk.viscosity);
+      const next = requiredLengthCoolant(st.ctx, p.view, { ...p.bundle, length: r.length }, p.ntu, n, side.h);
+      const settled = Math.abs(next.length - r.length) < 1e-5 * r.length;
+      if (it === 3 && next.length < r.length) break;
+      r = next;
+      if (settled) break;
     }
-    if (count >= nMin && count > nPrev) out.push({ sh: shells[i]!, count });
+    const length = Math.round(Math.ceil(r.length / st.step - 1e-9) * st.step * 1e9) / 1e9;
+    const dp = n * side.dp.total_Pa * (length / r.length);
+    if (!(length <= c.maxTubeLength_m + 1e-9) || dp > maxShellDp) continue;
+    if (r.length < bestLen - 1e-6 || (Math.abs(r.length - bestLen) <= 1e-6 && dp < bestDp)) {
+      const input = { ...p.input, baffleCut: cut, tubeLength_m: length };
+      best = { ...p, shell, input, bundle: { ...p.bundle, length }, requiredLength: r.length, shellDp: dp, cost: st.costOf(input) };
+      bestLen = r.length;
+      bestDp = dp;
+    }
   }
-  return out;
+  return best;
 }
 
-function rateCandidate(req: SizeRequest, ctx: DutyContext, p: Pre, step: number): Design | null {
+function rateCandidate(st: SearchState, p: Pre): Design | null {
+  const { req, ctx, step } = st;
+  const c = req.constraints;
+  const maxShellDp = c.maxShellPressureDrop_Pa ?? c.maxPressureDrop_Pa;
+  const n = p.input.shellsInSeries;
   for (let extra = 0; extra < 2; extra++) {
     const bundle = { ...p.bundle, length: Math.round((p.bundle.length + extra * step) * 1e9) / 1e9 };
     let rating;
     try {
       rating = p.shell
-        ? rateCoolant(ctx.s, ctx.coolant!.c, bundle, p.shell, ctx.coolant!.fouling, req.correlation, { profilePoints: 21 })
+        ? rateCoolant(ctx.s, ctx.coolant!.c, bundle, p.shell, p.view!.fouling, req.correlation, { profilePoints: 21 }, { processSide: p.input.processSide, shells: n, method: req.shellMethod, holds: p.holds })
         : rateWall(ctx.s, ctx.wall!.temp, bundle, req.correlation, { profilePoints: 21 });
     } catch {
       return null;
     }
     if (rating.outletTemp_C > ctx.tOut + 1e-6) continue;
-    if (rating.pressureDrop.total_Pa > req.constraints.maxPressureDrop_Pa) return null;
-    if (req.constraints.maxShellPressureDrop_Pa !== undefined && (rating.shellPressureDrop_Pa ?? 0) > req.constraints.maxShellPressureDrop_Pa) return null;
-    if (bundle.length > req.constraints.maxTubeLength_m + 1e-9) return null;
+    if (rating.pressureDrop.total_Pa > c.maxPressureDrop_Pa) return null;
+    if (p.shell && (rating.shellPressureDrop_Pa ?? 0) > maxShellDp) return null;
+    if (bundle.length > c.maxTubeLength_m + 1e-9) return null;
+    if (p.shell && bundle.length / p.shell.dShell > SHELL_ASPECT[1]) return null;
     const area = p.shell ? rating.area_m2 : bundle.count * Math.PI * bundle.dInner * bundle.length;
-    return { ...p.input, tubeLength_m: bundle.length, area_m2: area, requiredLength_m: p.requiredLength, overSurface_pct: (bundle.length / p.requiredLength - 1) * 100, cost: p.cost, rating };
+    const plan = p.shell ? bafflePlan(bundle.length, p.shell.baffleSpacing, p.shell.dShell) : undefined;
+    const input = { ...p.input, tubeLength_m: bundle.length, baffleCount: plan?.count };
+    const { shellWall_m: _w, ...design } = input;
+    void _w;
+    return {
+      ...design,
+      ...(plan ? { inletBaffleSpacing_m: plan.inlet, outletBaffleSpacing_m: plan.outlet } : { baffleCut: undefined, baffleCount: undefined }),
+      area_m2: area, requiredLength_m: p.requiredLength, overSurface_pct: (bundle.length / p.requiredLength - 1) * 100, cost: st.costOf(input), rating,
+    };
   }
   return null;
+}
+
+/** The process-side coefficient of a design: the tube side's if the process is in the tubes, else the shell side's. */
+const processH = (d: Design) => ((d.processSide ?? 'tubes') === 'tubes' ? d.rating.htc_W_m2K : (d.rating.shellHtc_W_m2K ?? 0));
+
+/** Writes `allocationReason` on every chosen design and `recommendedReason` on the first. */
+function explain(ctx: DutyContext, chosen: Design[], rule: string | undefined, all: Design[]): void {
+  if (!ctx.coolant) {
+    for (const d of chosen) d.allocationReason = 'The process is in the tubes: a wall boundary (a bath or a condensing/boiling shell side) cools the tubes.';
+    chosen[0]!.recommendedReason = `The cheapest of the designs within every limit (${all.length} rated).`;
+    return;
+  }
+  const best = new Map<ProcessSide, Design>();
+  for (const d of all) if (!best.has(d.processSide!)) best.set(d.processSide!, d);
+  for (const d of chosen) {
+    const other = best.get(d.processSide === 'tubes' ? 'shell' : 'tubes');
+    d.allocationReason = allocationReason(ctx.s, ctx.coolant.c, { side: d.processSide!, tubeH: d.rating.htc_W_m2K, shellH: d.rating.shellHtc_W_m2K ?? 0, tubeRe: d.rating.reynolds, otherProcessH: other ? processH(other) : undefined }, rule);
+  }
+  const r = chosen[0]!;
+  const other = best.get(r.processSide === 'tubes' ? 'shell' : 'tubes');
+  const where = r.processSide === 'tubes' ? 'in the tubes' : 'on the shell side';
+  const kpa = (x: number | undefined) => `${((x ?? 0) / 1000).toFixed(0)} kPa`;
+  const shells = (r.shellsInSeries ?? 1) > 1 ? ` ${r.shellsInSeries} shells in series keep each shell's tubes within the length limit and F ≥ 0.75.` : '';
+  let why: string;
+  if (other) {
+    const pct = other.cost !== 0 ? Math.round((1 - r.cost / other.cost) * 100) : 0;
+    why = `With the process ${where} it is the cheapest design within every limit: ${pct >= 0 ? `${pct} % below` : `${-pct} % above (the cheaper one breaks a velocity window)`} the best design with the process ${other.processSide === 'tubes' ? 'in the tubes' : 'on the shell side'} ` +
+      `(U ${Math.round(r.rating.overallU_W_m2K ?? 0)} against ${Math.round(other.rating.overallU_W_m2K ?? 0)} W/m²K; tube ΔP ${kpa(r.rating.pressureDrop.total_Pa)} against ${kpa(other.rating.pressureDrop.total_Pa)}, shell ΔP ${kpa(r.rating.shellPressureDrop_Pa)} against ${kpa(other.rating.shellPressureDrop_Pa)}).`;
+  } else {
+    why = `The cheapest design within every limit with the process ${where}${rule ? ` (${rule})` : ''}: U ${Math.round(r.rating.overallU_W_m2K ?? 0)} W/m²K, tube ΔP ${kpa(r.rating.pressureDrop.total_Pa)}, shell ΔP ${kpa(r.rating.shellPressureDrop_Pa)}.`;
+  }
+  r.recommendedReason = why + shells;
 }
 
 function noFeasible(reasons: Record<Reason, number>, evaluated: number): ThermalInputError {
@@ -218,4 +210,3 @@ function noFeasible(reasons: Record<Reason, number>, evaluated: number): Thermal
 export function size(request: SizeRequestInput, opts: SizeOptions = {}): SizeResult {
   return sizeParsed(sizeRequestSchema.parse(request), opts);
 }
-

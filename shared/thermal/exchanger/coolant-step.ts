@@ -2,15 +2,22 @@
  * One pass of the coolant rating's fixed point (`rateCoolant`): properties at the current mean
  * temperatures → overall U, ε-NTU outlets and new wall-temperature estimates. A module function
  * over a state object rather than a closure, so a rating creates no functions per call.
+ *
+ * The process (hot) stream is in the tubes or on the shell side (`side`); the coolant takes the
+ * other. Tube-side convection is for whichever fluid is in the tubes, heated or cooled as the wall
+ * temperature says (Dittus–Boelter's n, μ/μw follow from it); the shell side goes through the
+ * shell-side method table.
  */
+import type { ProcessSide } from '../../schemas/thermal';
 import type { CorrelationChoice } from '../correlations/select';
-import { effectiveness } from './effectiveness';
+import { effectivenessShells } from './arrangement';
 import { overallCoefficientOutside } from './overall';
 import { effectiveCp } from './rate-wall';
-import { shellSideKern, type ShellGeometry } from './shell-side';
+import type { PreparedShell, ShellMethodEntry } from './shell-methods';
 import { propertiesOrNull, type Stream } from './streams';
 import { tubeSideConvection, tubeSideH, type Bundle } from './tube-side';
 
+/** Fouling resistances, m²K/W: `inside` on the tube side, `outside` on the shell side. */
 export interface Fouling {
   inside: number;
   outside: number;
@@ -20,12 +27,17 @@ export interface Fouling {
 export interface CoolantState {
   s: Stream;
   c: Stream;
+  side: ProcessSide;
   b: Bundle;
-  shell: ShellGeometry;
+  /** identical shells in series; `b` is one shell's bundle */
+  shells: number;
+  method: ShellMethodEntry;
+  prepared: PreparedShell;
   fouling: Fouling;
   choice: CorrelationChoice;
   tHin: number;
   tCin: number;
+  /** outside tube area of all shells, m² */
   areaOut: number;
   tHout: number;
   tCout: number;
@@ -57,11 +69,17 @@ export function coolantStep(k: CoolantState, withWarnings: boolean) {
   const tCm = 0.5 * (tCin + k.tCout);
   const hot = s.properties(tHm);
   const cold = c.properties(tCm);
-  const wallIn = propertiesOrNull(s, k.tWi) ?? hot;
-  const muWallShell = (propertiesOrNull(c, k.tWo) ?? cold).viscosity;
-  const conv = withWarnings ? tubeSideConvection(b, s.massFlow_kg_s, hot, wallIn, tHm, k.tWi, s.fluid.phase, k.choice, true) : null;
-  const hIn = conv ? conv.h : tubeSideH(b, s.massFlow_kg_s, hot, wallIn, tHm, k.tWi, s.fluid.phase, k.choice);
-  const shellSide = shellSideKern(k.shell, b.dOuter, c.massFlow_kg_s, cold, muWallShell);
+  const processInTubes = k.side === 'tubes';
+  const tube = processInTubes ? s : c;
+  const tubeBulk = processInTubes ? hot : cold;
+  const tTube = processInTubes ? tHm : tCm;
+  const shellStream = processInTubes ? c : s;
+  const shellBulk = processInTubes ? cold : hot;
+  const wallIn = propertiesOrNull(tube, k.tWi) ?? tubeBulk;
+  const muWallShell = (propertiesOrNull(shellStream, k.tWo) ?? shellBulk).viscosity;
+  const conv = withWarnings ? tubeSideConvection(b, tube.massFlow_kg_s, tubeBulk, wallIn, tTube, k.tWi, tube.fluid.phase, k.choice, true) : null;
+  const hIn = conv ? conv.h : tubeSideH(b, tube.massFlow_kg_s, tubeBulk, wallIn, tTube, k.tWi, tube.fluid.phase, k.choice);
+  const shellSide = k.method.rate(k.prepared, shellStream.massFlow_kg_s, shellBulk, muWallShell);
   const u = overallCoefficientOutside(hIn, shellSide.h, b.dInner, b.dOuter, b.kWall, k.fouling.inside, k.fouling.outside);
   const cpH = effectiveCp(s, hot, k.tHout);
   const ch = s.massFlow_kg_s * cpH.cp;
@@ -69,15 +87,17 @@ export function coolantStep(k: CoolantState, withWarnings: boolean) {
   const cmin = Math.min(ch, cc);
   const cr = cmin / Math.max(ch, cc);
   const ntu = (u * k.areaOut) / cmin;
-  const eps = effectiveness(ntu, cr, b.passes);
+  const eps = effectivenessShells(ntu, cr, b.passes, k.shells);
   const q = eps * cmin * (tHin - tCin);
-  const rTotal = 1 / u;
-  const rIn = b.dOuter / (b.dInner * hIn);
+  // wall temperatures from the share of the resistance on each side of the wall
+  const fIn = (b.dOuter / (b.dInner * hIn)) * u;
+  const fOut = u / shellSide.h;
   const dtMean = tHm - tCm;
   return {
     tHout: tHin - q / ch, tCout: tCin + q / cc,
-    tWi: tHm - (rIn / rTotal) * dtMean, tWo: tCm + (1 / shellSide.h / rTotal) * dtMean,
-    hot, cold, conv, shell: shellSide, muWallShell, u, ntu, eps, cr, q, ch, cc,
+    tWi: processInTubes ? tHm - fIn * dtMean : tCm + fIn * dtMean,
+    tWo: processInTubes ? tCm + fOut * dtMean : tHm - fOut * dtMean,
+    hot, cold, tubeBulk, shellBulk, conv, shell: shellSide, muWallShell, u, ntu, eps, cr, q, ch, cc, hIn,
     condensate: cpH.condensate_kg_s, latent: cpH.latent_W,
   };
 }

@@ -1,26 +1,49 @@
 /**
- * Rating with a coolant on the shell side: overall U on the outside area (Kern shell side, wall
- * conduction, fouling both sides) and ε-NTU for one shell pass (counterflow for 1 tube pass, the
- * 1–2 formula for an even number). Properties at each stream's mean bulk temperature, iterated;
- * wall viscosities at wall temperatures estimated from the resistances.
+ * Rating with a coolant: the process (hot) stream in the tubes or on the shell side, the coolant on
+ * the other; one to four identical shells in series. Overall U on the outside area (tube-side
+ * correlation for the tube fluid, the shell-side method table for the shell fluid, wall conduction,
+ * fouling both sides) and ε-NTU for the arrangement (counterflow shells for one tube pass, 1–2
+ * shells for an even number). Properties at each stream's mean bulk temperature, iterated; wall
+ * viscosities at wall temperatures estimated from the resistances. Kern's shell side is computed
+ * beside the chosen method as a second opinion.
  */
-import type { RateResult } from '../../schemas/thermal';
+import type { ProcessSide, RateResult, ShellMethod } from '../../schemas/thermal';
 import type { CorrelationChoice } from '../correlations/select';
 import { ThermalInputError } from '../errors';
+import { bafflePlan } from '../geometry/baffles';
+import { lmtdCorrectionShells } from './arrangement';
 import { ENGINEERING_CAUTION, tubeWarnings } from './checks';
 import { coolantPass, coolantStep, type CoolantState, type Fouling } from './coolant-step';
-import { lmtdCorrectionFactor } from './effectiveness';
 import { coolantProfile } from './profile';
 import type { RateOptions } from './rate-wall';
+import { kernMethod, prepareShell, shellMethod, type PreparedShell } from './shell-methods';
+import { shellWarnings, type ShellGeometry } from './shell-side';
 import { solveFixedPoint } from './solve';
-import { shellPressureDropKern, shellWarnings, type ShellGeometry } from './shell-side';
 import type { Stream } from './streams';
 import { entranceLength, tubePressureDrop, tubeVelocity, type Bundle } from './tube-side';
 
-/** 0.75: below this F a single shell is refused; more shells in series are needed (common practice). */
+/** 0.75: below this F the arrangement is refused; more shells in series are needed (common practice). */
 export const MIN_LMTD_CORRECTION = 0.75;
 
 export type { Fouling };
+
+/** Where the streams go and how many shells: the allocation and arrangement a rating is for. */
+export interface Arrangement {
+  processSide: ProcessSide;
+  shells: number;
+  method?: ShellMethod;
+  /** tubes the laid-out tubesheet holds, for the fill finding */
+  holds?: number;
+}
+
+/** One shell's geometry for the shell-side methods, with the baffle plan the nozzles need. */
+export function prepareFor(b: Bundle, shell: ShellGeometry): PreparedShell {
+  const plan = bafflePlan(b.length, shell.baffleSpacing, shell.dShell, shell.inletSpacing, shell.outletSpacing);
+  return prepareShell({
+    dShell: shell.dShell, dOuter: b.dOuter, pitch: shell.pitch, layout: shell.layout, tubeCount: b.count, tubePasses: b.passes,
+    tubeLength: b.length, baffleSpacing: shell.baffleSpacing, baffleCut: shell.baffleCut, inletSpacing: plan.inlet, outletSpacing: plan.outlet,
+  });
+}
 
 export function rateCoolant(
   s: Stream,
@@ -30,13 +53,20 @@ export function rateCoolant(
   fouling: Fouling,
   choice: CorrelationChoice,
   opts: RateOptions = {},
+  arr: Arrangement = { processSide: 'tubes', shells: 1 },
+  prepared: PreparedShell = prepareFor(b, shell),
 ): RateResult {
   const tHin = s.inletTemp_C;
   const tCin = c.inletTemp_C;
-  const areaOut = b.count * Math.PI * b.dOuter * b.length;
+  const N = arr.shells;
+  const areaOut = N * b.count * Math.PI * b.dOuter * b.length;
   const tW0 = 0.5 * (tHin + tCin);
   const ratio = (s.massFlow_kg_s * s.properties(tHin).specificHeat) / (c.massFlow_kg_s * c.properties(tCin).specificHeat);
-  const k: CoolantState = { s, c, b, shell, fouling, choice, tHin, tCin, areaOut, tHout: 0, tCout: 0, tWi: tW0, tWo: tW0, ratio };
+  const methodId = arr.method ?? 'bell-delaware';
+  const method = shellMethod(methodId);
+  const k: CoolantState = {
+    s, c, side: arr.processSide, b, shells: N, method, prepared, fouling, choice, tHin, tCin, areaOut, tHout: 0, tCout: 0, tWi: tW0, tWo: tW0, ratio,
+  };
   const span = tHin - tCin;
   const x = solveFixedPoint((x) => coolantPass(k, x), tHin - 0.5 * span, tCin, tHin, 1e-7 * (1 + span));
   if (x !== k.tHout) coolantPass(k, x);
@@ -49,27 +79,33 @@ export function rateCoolant(
   if (problem) {
     throw new ThermalInputError('coolant-outlet-state', `The coolant would leave at ${tCout.toFixed(1)} °C, which it cannot: ${problem} Raise the coolant flow.`, 'boundary.massFlow_kg_s');
   }
-  const f = lmtdCorrectionFactor(st.ntu, st.cr, b.passes);
+  const f = lmtdCorrectionShells(st.ntu, st.cr, b.passes, N);
   if (f < MIN_LMTD_CORRECTION) {
     throw new ThermalInputError(
       'lmtd-correction-low',
-      `With one shell pass and ${b.passes} tube passes the LMTD correction factor F is ${f.toFixed(2)}, below ${MIN_LMTD_CORRECTION}: ` +
+      `With ${N} shell${N > 1 ? 's' : ''} in series and ${b.passes} tube passes the LMTD correction factor F is ${f.toFixed(2)}, below ${MIN_LMTD_CORRECTION}: ` +
         'the streams approach a temperature cross and a small change in flow or fouling would lose much of the duty. ' +
-        'Use one tube pass (counterflow), two or more shells in series, or a larger temperature approach.',
+        'Use one tube pass (counterflow), more shells in series, or a larger temperature approach.',
       'geometry.tubePasses',
     );
   }
-  const dp = tubePressureDrop(b, s.massFlow_kg_s, st.hot);
-  const velocity = tubeVelocity(b, s.massFlow_kg_s, st.hot.density);
-  const shellDp = shellPressureDropKern(shell, st.shell, b.length, st.cold, st.muWallShell);
+  const inTubes = arr.processSide === 'tubes';
+  const tube = inTubes ? s : c;
+  const shellStream = inTubes ? c : s;
+  const dp1 = tubePressureDrop(b, tube.massFlow_kg_s, st.tubeBulk);
+  const velocity = tubeVelocity(b, tube.massFlow_kg_s, st.tubeBulk.density);
+  const kern = kernMethod.rate(prepared, shellStream.massFlow_kg_s, st.shellBulk, st.muWallShell);
+  const sd = st.shell;
+  const fill = arr.holds ? b.count / arr.holds : undefined;
   const warnings = [
     ...conv.warnings,
-    ...tubeWarnings(s, b, velocity, dp.total_Pa),
-    ...shellWarnings(shell, st.shell, c.fluid.phase === 'liquid'),
+    ...tubeWarnings(tube, b, velocity, N * dp1.total_Pa),
+    ...shellWarnings(shell, sd, method, shellStream.fluid.phase === 'liquid', b.length, fill),
   ];
   const n = opts.profilePoints ?? 21;
+  const hotOut = tHout;
   const result: RateResult = {
-    outletTemp_C: tHout,
+    outletTemp_C: hotOut,
     duty_W: st.q,
     regime: conv.regime,
     correlation: conv.method,
@@ -81,23 +117,39 @@ export function rateCoolant(
     htc_W_m2K: conv.h,
     velocity_m_s: velocity,
     entranceLength_m: entranceLength(conv.re, conv.pr, b.dInner),
-    frictionFactor: dp.frictionFactor,
-    pressureDrop: { friction_Pa: dp.friction_Pa, returns_Pa: dp.returns_Pa, nozzles_Pa: dp.nozzles_Pa, total_Pa: dp.total_Pa },
+    frictionFactor: dp1.frictionFactor,
+    pressureDrop: { friction_Pa: N * dp1.friction_Pa, returns_Pa: N * dp1.returns_Pa, nozzles_Pa: N * dp1.nozzles_Pa, total_Pa: N * dp1.total_Pa },
     bulkMeanTemp_C: 0.5 * (tHin + tHout),
     area_m2: areaOut,
     warnings,
     caution: ENGINEERING_CAUTION,
-    profile: n > 1 ? coolantProfile(n, b, tHin, tHout, tCin, tCout, st.u * areaOut, st.ch, st.cc) : [],
+    profile: n > 1 ? coolantProfile(n, { ...b, length: b.length * N }, tHin, tHout, tCin, tCout, st.u * areaOut, st.ch, st.cc) : [],
     coolantOutletTemp_C: tCout,
     overallU_W_m2K: st.u,
     effectiveness: st.eps,
     ntu: st.ntu,
     lmtdCorrectionF: f,
-    shellPressureDrop_Pa: shellDp,
-    shellVelocity_m_s: st.shell.velocity,
-    shellHtc_W_m2K: st.shell.h,
+    shellPressureDrop_Pa: N * sd.dp.total_Pa,
+    shellVelocity_m_s: sd.velocity,
+    shellHtc_W_m2K: sd.h,
     shellInnerDiameter_m: shell.dShell,
+    processSide: arr.processSide,
+    tubeFluid: inTubes ? 'process' : 'coolant',
+    shellFluid: inTubes ? 'coolant' : 'process',
+    shellsInSeries: N,
+    shellMethod: methodId,
+    shellHtcKern_W_m2K: kern.h,
+    shellPressureDropKern_Pa: N * kern.dp.total_Pa,
+    shellReynolds: sd.re,
+    shellPressureDropBreakdown: { crossflow_Pa: N * sd.dp.crossflow_Pa, window_Pa: N * sd.dp.window_Pa, ends_Pa: N * sd.dp.ends_Pa, total_Pa: N * sd.dp.total_Pa },
+    baffleSpacing_m: prepared.baffleSpacing,
+    inletBaffleSpacing_m: prepared.inletSpacing,
+    outletBaffleSpacing_m: prepared.outletSpacing,
+    baffleCut: shell.baffleCut,
+    baffleCount: prepared.baffles,
   };
+  if (methodId === 'bell-delaware') result.shellCorrections = sd.corrections;
+  if (fill !== undefined) result.shellFill = fill;
   if (s.humidityRatio !== undefined) {
     result.condensate_kg_s = st.condensate;
     result.latentDuty_W = st.latent;

@@ -7,10 +7,10 @@
 import type { CorrelationChoice } from '../correlations/select';
 import type { FluidProperties } from '../fluids';
 import { overallCoefficientOutside } from './overall';
-import { shellSideKern, type ShellGeometry } from './shell-side';
 import type { Stream } from './streams';
 import { tubeSideH, type Bundle } from './tube-side';
-import type { Fouling } from './rate-coolant';
+import type { ProcessSide } from '../../schemas/thermal';
+import type { Fouling } from './coolant-step';
 
 export interface DutyContext {
   s: Stream;
@@ -31,7 +31,6 @@ export interface DutyContext {
     tCm: number;
     cold: FluidProperties;
     coldAt: (t: number) => FluidProperties | null;
-    fouling: Fouling;
     ch: number;
     cc: number;
     cmin: number;
@@ -55,29 +54,71 @@ export function requiredLengthWall(ctx: DutyContext, b: Bundle): number {
   return length;
 }
 
-/** Length of one tube, m, giving NTU `ntu` with the coolant on the shell side. */
-export function requiredLengthCoolant(ctx: DutyContext, b: Bundle, shell: ShellGeometry, ntu: number, shellH0?: number): number {
+/**
+ * The two sides of one allocation: which stream is in the tubes and which on the shell side, their
+ * bulk properties at the duty's mean temperatures, cached wall-state lookups and the fouling.
+ */
+export interface SideView {
+  side: ProcessSide;
+  tube: Stream;
+  tubeBulk: FluidProperties;
+  tubeAt: (t: number) => FluidProperties | null;
+  tTube: number;
+  shell: Stream;
+  shellBulk: FluidProperties;
+  shellAt: (t: number) => FluidProperties | null;
+  tShell: number;
+  fouling: Fouling;
+}
+
+export function sideView(ctx: DutyContext, side: ProcessSide, fouling: Fouling): SideView {
   const k = ctx.coolant!;
-  const tHm = ctx.tMean;
-  let tWi = 0.5 * (tHm + k.tCm);
+  const p = { s: ctx.s, bulk: ctx.bulk, at: ctx.hotAt, t: ctx.tMean };
+  const c = { s: k.c, bulk: k.cold, at: k.coldAt, t: k.tCm };
+  const [t, sh] = side === 'tubes' ? [p, c] : [c, p];
+  return { side, tube: t.s, tubeBulk: t.bulk, tubeAt: t.at, tTube: t.t, shell: sh.s, shellBulk: sh.bulk, shellAt: sh.at, tShell: sh.t, fouling };
+}
+
+export interface RequiredLength {
+  /** one shell's tube length, m */
+  length: number;
+  u: number;
+  hIn: number;
+  hOut: number;
+}
+
+/**
+ * Length of one shell's tubes, m, giving the total NTU `ntu` over `shells` shells in series, with
+ * the tube and shell streams of `v`. `hShell0` is the shell-side coefficient at μ/μw = 1: both
+ * shell-side methods scale with (μ/μw)^0.14, so only that factor changes as the wall estimate moves.
+ */
+export function requiredLengthCoolant(ctx: DutyContext, v: SideView, b: Bundle, ntu: number, shells: number, hShell0: number): RequiredLength {
+  const k = ctx.coolant!;
+  const inTubes = v.side === 'tubes';
+  const dt = ctx.tMean - k.tCm;
+  let tWi = 0.5 * (v.tTube + v.tShell);
   let tWo = tWi;
-  // shell-side h at μ/μw = 1; Kern's h scales with (μ/μw)^0.14, so only that factor changes below
-  const h0 = shellH0 ?? shellSideKern(shell, b.dOuter, k.c.massFlow_kg_s, k.cold, k.cold.viscosity).h;
   let length = b.length;
   const bl = { ...b };
+  const out: RequiredLength = { length, u: 0, hIn: 0, hOut: 0 };
   for (let it = 0; it < 30; it++) {
     bl.length = length;
-    const hIn = tubeSideH(bl, ctx.s.massFlow_kg_s, ctx.bulk, ctx.hotAt(tWi) ?? ctx.bulk, tHm, tWi, ctx.s.fluid.phase, ctx.choice);
-    const hOut = h0 * Math.pow(k.cold.viscosity / (k.coldAt(tWo) ?? k.cold).viscosity, 0.14);
-    const u = overallCoefficientOutside(hIn, hOut, b.dInner, b.dOuter, b.kWall, k.fouling.inside, k.fouling.outside);
-    const next = (ntu * k.cmin) / (u * b.count * Math.PI * b.dOuter);
-    const dt = tHm - k.tCm;
-    tWi = tHm - (b.dOuter / (b.dInner * hIn)) * u * dt;
-    tWo = k.tCm + (u / hOut) * dt;
-    if (Math.abs(next - length) < 1e-8 * next && it > 1) return next;
+    const hIn = tubeSideH(bl, v.tube.massFlow_kg_s, v.tubeBulk, v.tubeAt(tWi) ?? v.tubeBulk, v.tTube, tWi, v.tube.fluid.phase, ctx.choice);
+    const hOut = hShell0 * Math.pow(v.shellBulk.viscosity / (v.shellAt(tWo) ?? v.shellBulk).viscosity, 0.14);
+    const u = overallCoefficientOutside(hIn, hOut, b.dInner, b.dOuter, b.kWall, v.fouling.inside, v.fouling.outside);
+    const next = (ntu * k.cmin) / (u * shells * b.count * Math.PI * b.dOuter);
+    const fIn = (b.dOuter / (b.dInner * hIn)) * u * dt;
+    const fOut = (u / hOut) * dt;
+    tWi = inTubes ? v.tTube - fIn : v.tTube + fIn;
+    tWo = inTubes ? v.tShell + fOut : v.tShell - fOut;
+    out.u = u;
+    out.hIn = hIn;
+    out.hOut = hOut;
+    out.length = next;
+    if (Math.abs(next - length) < 1e-8 * next && it > 1) return out;
     length = next;
   }
-  return length;
+  return out;
 }
 
 /** Property lookups rounded to 0.1 K and cached: wall estimates need μ_w, not a fresh call each time. */

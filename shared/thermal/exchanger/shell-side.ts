@@ -1,59 +1,50 @@
-/** Shell-side coefficient and pressure drop of a baffled shell by Kern's method. */
+/** A baffled shell's geometry and the shell-side findings (velocity window, method range, L/D, fill). */
 import type { ThermalWarning } from '../errors';
-import type { FluidProperties } from '../fluids';
-import { pitchFamily, type Layout } from '../geometry/layout';
-import { equivalentDiameterKern, frictionShellKern, nusseltShellKern, pressureDropShellKern, shellCrossflowAreaKern } from './kern';
+import { legacyBaffleSpacing } from '../geometry/baffles';
+import type { Layout } from '../geometry/layout';
+import type { ShellMethodEntry, ShellSideResult } from './shell-methods';
 
 export interface ShellGeometry {
   dShell: number;
+  /** central baffle spacing, m */
   baffleSpacing: number;
   baffleCut: number;
   pitch: number;
   layout: Layout;
+  /** end spacings at the nozzles, m (default: bafflePlan's rule) */
+  inletSpacing?: number;
+  outletSpacing?: number;
 }
 
-/** Default baffle spacing: 0.4 D_s (common practice, 0.2–1 D_s), at least 50.8 mm (TEMA RCB-4.51, memory). */
+/** Old default spacing, for designs stored without one: 0.4 D_s, at least 50.8 mm (common practice). */
 export function defaultBaffleSpacing(dShell: number, tubeLength: number): number {
-  return Math.min(tubeLength, Math.max(0.4 * dShell, 0.0508));
+  return legacyBaffleSpacing(dShell, tubeLength);
 }
 
-export interface ShellSide {
-  h: number;
-  re: number;
-  velocity: number;
-  massVelocity: number;
-  dEquivalent: number;
-}
+/** 0.3–1 m/s: liquids on the shell side (domain brief 2.4, common practice). */
+export const SHELL_LIQUID_VELOCITY = [0.3, 1] as const;
+/** 3–15: tube length over shell ID of one shell (common practice). */
+export const SHELL_ASPECT = [3, 15] as const;
+/** 0.85: below this share of what the laid-out tubesheet holds, a shell is partly filled (common practice). */
+export const SHELL_FILL_MIN = 0.85;
 
-export function shellSideKern(s: ShellGeometry, dOuter: number, massFlow: number, bulk: FluidProperties, muWall: number): ShellSide {
-  const area = shellCrossflowAreaKern(s.dShell, s.baffleSpacing, s.pitch, dOuter);
-  const de = equivalentDiameterKern(s.pitch, dOuter, pitchFamily(s.layout));
-  const g = massFlow / area;
-  const re = (g * de) / bulk.viscosity;
-  const nu = nusseltShellKern(re, bulk.prandtl, bulk.viscosity / muWall);
-  return { h: (nu * bulk.conductivity) / de, re, velocity: g / bulk.density, massVelocity: g, dEquivalent: de };
-}
-
-/** Baffles in a tube of this length: crossings `round(L/B)`, baffles one fewer. */
-export function baffleCount(s: ShellGeometry, tubeLength: number): number {
-  return Math.max(0, Math.round(tubeLength / s.baffleSpacing) - 1);
-}
-
-export function shellPressureDropKern(s: ShellGeometry, side: ShellSide, tubeLength: number, bulk: FluidProperties, muWall: number): number {
-  const f = frictionShellKern(side.re);
-  return pressureDropShellKern(f, side.massVelocity, baffleCount(s, tubeLength), s.dShell, bulk.density, side.dEquivalent, bulk.viscosity / muWall);
-}
-
-export function shellWarnings(s: ShellGeometry, side: ShellSide, liquid: boolean): ThermalWarning[] {
+export function shellWarnings(s: ShellGeometry, side: ShellSideResult, method: ShellMethodEntry, liquid: boolean, tubeLength: number, fill: number | undefined): ThermalWarning[] {
   const out: ThermalWarning[] = [];
-  if (side.re < 2000 || side.re > 1e6) {
-    out.push({ code: 'shell-correlation-range', message: `Shell-side Re = ${Math.round(side.re)} is outside Kern's range (2·10³–10⁶): the shell-side coefficient is uncertain.` });
+  if (side.re < method.validity.reMin || side.re > method.validity.reMax) {
+    out.push({ code: 'shell-correlation-range', message: `Shell-side Re = ${Math.round(side.re)} is outside the range of ${method.label} (${method.validity.reMin}–${method.validity.reMax.toExponential(0)}): the shell-side coefficient is uncertain.` });
   }
-  if (Math.abs(s.baffleCut - 0.25) > 0.03) {
-    out.push({ code: 'shell-baffle-cut', message: `Kern's method is fitted to a 25 % baffle cut; ${Math.round(s.baffleCut * 100)} % is rated as if it were 25 %.` });
+  if (s.baffleCut < method.validity.cutMin || s.baffleCut > method.validity.cutMax) {
+    out.push({ code: 'shell-baffle-cut', message: `${method.label} is fitted to baffle cuts of ${Math.round(method.validity.cutMin * 100)}–${Math.round(method.validity.cutMax * 100)} %; ${Math.round(s.baffleCut * 100)} % is outside it.` });
   }
-  // 0.3–1 m/s: liquids on the shell side (domain brief 2.4, common practice)
-  if (liquid && side.velocity < 0.3) out.push({ code: 'shell-velocity-low', message: `Shell-side velocity ${side.velocity.toFixed(2)} m/s is below about 0.3 m/s: liquids foul at low velocity (common practice). Closer baffles raise it.` });
-  if (liquid && side.velocity > 1) out.push({ code: 'shell-velocity-high', message: `Shell-side velocity ${side.velocity.toFixed(2)} m/s is above about 1 m/s for liquids (common practice): risk of erosion and vibration. Wider baffle spacing lowers it.` });
+  const [vLo, vHi] = SHELL_LIQUID_VELOCITY;
+  if (liquid && side.velocity < vLo) out.push({ code: 'shell-velocity-low', message: `Shell-side velocity ${side.velocity.toFixed(2)} m/s is below about ${vLo} m/s: liquids foul at low velocity (common practice). Closer baffles raise it.` });
+  if (liquid && side.velocity > vHi) out.push({ code: 'shell-velocity-high', message: `Shell-side velocity ${side.velocity.toFixed(2)} m/s is above about ${vHi} m/s for liquids (common practice): risk of erosion and vibration. Wider baffle spacing lowers it.` });
+  const aspect = tubeLength / s.dShell;
+  if (aspect < SHELL_ASPECT[0] || aspect > SHELL_ASPECT[1]) {
+    out.push({ code: 'shell-aspect', message: `Tube length over shell diameter is ${aspect.toFixed(1)}, outside about ${SHELL_ASPECT[0]}–${SHELL_ASPECT[1]} (common practice): ${aspect < SHELL_ASPECT[0] ? 'a short, wide shell distributes the shell-side flow poorly and costs more per m²' : 'a long, slender shell is hard to support, ship and pull'}.` });
+  }
+  if (fill !== undefined && fill < SHELL_FILL_MIN) {
+    out.push({ code: 'shell-partly-filled', message: `The shell holds ${Math.round(fill * 100)} % of the tubes its tubesheet could take: the empty space lets shell-side flow bypass the bundle (use dummy tubes or sealing strips, or a smaller shell).` });
+  }
   return out;
 }
