@@ -61,7 +61,7 @@ function oilInput(): OfferPdfInput {
       shellCorrections: { Jc: 1.02, Jl: 0.71, Jb: 0.86, Js: 0.94, Jr: 1 },
     },
   };
-  const revision: Revision = { ...base.revision, duty: oilDuty, design, alternatives: [{ ...withoutV2(design), ...{ processSide: 'shell', shellsInSeries: 2 } }].map(({ rating: _r, ...a }) => a) };
+  const revision: Revision = { ...base.revision, duty: oilDuty, design, alternatives: [design].map(({ rating: _r, ...a }) => a) };
   return { ...base, revision };
 }
 
