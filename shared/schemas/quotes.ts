@@ -4,7 +4,7 @@
  * price lines and the price-book version, so any offer can be reproduced.
  */
 import { z } from 'zod';
-import { designSchema, layoutSchema, sizeRequestSchema } from './thermal';
+import { designSchema, layoutSchema, processSideSchema, SHELLS_IN_SERIES_MAX, sizeRequestSchema } from './thermal';
 import { priceSchema } from './price-book';
 import { tubeMaterialIds } from '../thermal/geometry/materials';
 import { plainText } from './text';
@@ -40,6 +40,12 @@ export const designEditSchema = z.object({
   layout: layoutSchema,
   shellInnerDiameter_m: z.number().positive().max(3),
   baffleSpacing_m: z.number().positive().max(5).optional(),
+  /** where the process stream goes (default: in the tubes); a wall-cooled duty keeps it in the tubes */
+  processSide: processSideSchema.optional(),
+  /** identical shells in series (default 1); tubeCount and tubeLength_m are per shell */
+  shellsInSeries: z.int().min(1).max(SHELLS_IN_SERIES_MAX).optional(),
+  /** baffle cut, a fraction of the shell inner diameter (default 0.25) */
+  baffleCut: z.number().min(0.15).max(0.45).optional(),
 });
 export type DesignEdit = z.infer<typeof designEditSchema>;
 
