@@ -274,6 +274,9 @@ export const rateResultSchema = z.object({
   baffleCount: z.int().optional(),
   /** tubes rated against tubes the laid-out tubesheet holds (1 = full) */
   shellFill: num.optional(),
+  /** fouling resistances used, m²K/W: the request's, else each fluid's default */
+  foulingTube_m2K_W: num.optional(),
+  foulingShell_m2K_W: num.optional(),
 });
 export type RateResult = z.infer<typeof rateResultSchema>;
 

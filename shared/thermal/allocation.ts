@@ -62,7 +62,10 @@ export function allocationReason(process: Stream, coolant: Stream, f: Allocation
   const c = name(coolant);
   const h = (x: number) => `h ≈ ${Math.round(x / 10) * 10} W/m²K`;
   if (f.side === 'shell') {
-    const why = f.otherProcessH !== undefined ? `baffled crossflow gives ${h(f.shellH)} where ${p} in the tubes would reach ${h(f.otherProcessH)}` : `baffled crossflow gives ${h(f.shellH)}`;
+    const why =
+      f.otherProcessH === undefined ? `baffled crossflow gives ${h(f.shellH)}`
+      : f.otherProcessH < f.shellH ? `baffled crossflow gives ${h(f.shellH)} where ${p} in the tubes would reach ${h(f.otherProcessH)}`
+      : `${h(f.shellH)} in baffled crossflow (${h(f.otherProcessH)} in the tubes, but the exchanger as a whole comes out dearer that way)`;
     const clean = coolant.aqueous ? `; ${c} in the tubes, which foul more and are cleaned mechanically` : `; ${c} in the tubes (${h(f.tubeH)})`;
     return `${cap(p)} on the shell side: ${why}${clean}.${rule ? ` (${rule}.)` : ''}`;
   }

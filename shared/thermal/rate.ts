@@ -5,11 +5,13 @@
  * shell side (`geometry.processSide`), in one to four shells in series. A wall boundary keeps the
  * process in the tubes. A wall or coolant at or above the process inlet (a heating duty) is refused
  * with `not-a-cooler` rather than computed. Fouling given on the boundary is per side (inside = tube
- * side, outside = shell side, whichever fluid is there); absent, the rating is clean.
+ * side, outside = shell side, whichever fluid is there); absent, each side takes its fluid's default
+ * (allocation.ts, domain brief 2.3), as the sizing search does.
  */
 import type { RateRequest, RateRequestInput, RateResult } from '../schemas/thermal';
 import { rateRequestSchema } from '../schemas/thermal';
 import { ThermalInputError } from './errors';
+import { defaultFouling } from './allocation';
 import { rateCoolant } from './exchanger/rate-coolant';
 import { rateWall, type RateOptions } from './exchanger/rate-wall';
 import { defaultBaffleSpacing, type ShellGeometry } from './exchanger/shell-side';
@@ -94,8 +96,13 @@ export function rateParsed(req: RateRequest, opts: RateOptions = {}): RateResult
   c.properties(c.inletTemp_C);
   const shell = shellOf(req.boundary, b);
   const holds = tubeCountInShell({ shellInnerDiameter_m: shell.dShell, tubeOuterDiameter_m: b.dOuter, tubePitch_m: shell.pitch, layout: shell.layout, tubePasses: b.passes });
-  const r = rateCoolant(s, c, b, shell, { inside: req.boundary.foulingInside_m2K_W ?? 0, outside: req.boundary.foulingOutside_m2K_W ?? 0 }, req.correlation, opts, {
-    processSide: req.geometry.processSide ?? 'tubes',
+  const side = req.geometry.processSide ?? 'tubes';
+  const fouling = {
+    inside: req.boundary.foulingInside_m2K_W ?? defaultFouling(side === 'tubes' ? s : c),
+    outside: req.boundary.foulingOutside_m2K_W ?? defaultFouling(side === 'tubes' ? c : s),
+  };
+  const r = rateCoolant(s, c, b, shell, fouling, req.correlation, opts, {
+    processSide: side,
     shells: req.geometry.shellsInSeries ?? 1,
     method: req.shellMethod,
     holds: holds >= b.count ? holds : undefined,

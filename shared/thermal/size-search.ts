@@ -222,8 +222,9 @@ interface Base {
 /** The required length with the reference material (the first in the list): one fixed point per geometry and spacing. */
 function solveBase(ctx: DutyContext, view: SideView | undefined, b: Bundle, opt: ShellOption | undefined, ntus: number[]): Base | null {
   const first = ntus.findIndex(Number.isFinite);
-  const r = view ? requiredLengthCoolant(ctx, view, b, ntus[first]!, first + 1, opt!.h0) : { length: requiredLengthWall(ctx, b), u: 0, hIn: 0, hOut: 0 };
-  return Number.isFinite(r.length) ? { ...r, first } : null;
+  const r = (view ? requiredLengthCoolant(ctx, view, b, ntus[first]!, first + 1, opt!.h0) : { length: requiredLengthWall(ctx, b), u: 0, hIn: 0, hOut: 0 }) as Base;
+  r.first = first;
+  return Number.isFinite(r.length) ? r : null;
 }
 
 /**

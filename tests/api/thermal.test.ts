@@ -127,10 +127,12 @@ describe('POST /api/thermal/size', () => {
       boundary: {
         ...sizeBody().boundary,
         shellInnerDiameter_m: d.shellInnerDiameter_m, baffleSpacing_m: d.baffleSpacing_m, tubePitch_m: d.tubePitch_m, layout: d.layout,
+        baffleCut: d.baffleCut,
       },
       geometry: {
         tubeOuterDiameter_m: d.tubeOuterDiameter_m, tubeWall_m: d.tubeWall_m, tubeCount: d.tubeCount,
         tubeLength_m: d.tubeLength_m, tubePasses: d.tubePasses, tubeMaterial: d.tubeMaterial,
+        processSide: d.processSide, shellsInSeries: d.shellsInSeries,
       },
     });
     expect(rerate.status).toBe(200);

@@ -147,6 +147,8 @@ export function rateCoolant(
     outletBaffleSpacing_m: prepared.outletSpacing,
     baffleCut: shell.baffleCut,
     baffleCount: prepared.baffles,
+    foulingTube_m2K_W: fouling.inside,
+    foulingShell_m2K_W: fouling.outside,
   };
   if (methodId === 'bell-delaware') result.shellCorrections = sd.corrections;
   if (fill !== undefined) result.shellFill = fill;

@@ -98,12 +98,13 @@ export function requiredLengthCoolant(ctx: DutyContext, v: SideView, b: Bundle, 
   const dt = ctx.tMean - k.tCm;
   let tWi = 0.5 * (v.tTube + v.tShell);
   let tWo = tWi;
-  let length = b.length;
-  const bl = { ...b };
+  const l0 = b.length;
+  let length = l0;
   const out: RequiredLength = { length, u: 0, hIn: 0, hOut: 0 };
+  // b.length carries the iterate (entrance effects) and is restored before returning
   for (let it = 0; it < 30; it++) {
-    bl.length = length;
-    const hIn = tubeSideH(bl, v.tube.massFlow_kg_s, v.tubeBulk, v.tubeAt(tWi) ?? v.tubeBulk, v.tTube, tWi, v.tube.fluid.phase, ctx.choice);
+    b.length = length;
+    const hIn = tubeSideH(b, v.tube.massFlow_kg_s, v.tubeBulk, v.tubeAt(tWi) ?? v.tubeBulk, v.tTube, tWi, v.tube.fluid.phase, ctx.choice);
     const hOut = hShell0 * Math.pow(v.shellBulk.viscosity / (v.shellAt(tWo) ?? v.shellBulk).viscosity, 0.14);
     const u = overallCoefficientOutside(hIn, hOut, b.dInner, b.dOuter, b.kWall, v.fouling.inside, v.fouling.outside);
     const next = (ntu * k.cmin) / (u * shells * b.count * Math.PI * b.dOuter);
@@ -115,9 +116,10 @@ export function requiredLengthCoolant(ctx: DutyContext, v: SideView, b: Bundle, 
     out.hIn = hIn;
     out.hOut = hOut;
     out.length = next;
-    if (Math.abs(next - length) < 1e-8 * next && it > 1) return out;
+    if (Math.abs(next - length) < 1e-8 * next && it > 1) break;
     length = next;
   }
+  b.length = l0;
   return out;
 }
 
