@@ -110,6 +110,27 @@ describe('limits on both sides and shells in series (issue 10)', () => {
   });
 });
 
+describe('findings and exclusions (issue 10)', () => {
+  it('a shell L/D outside 3–15 (common practice) is excluded and counted in the explanation', () => {
+    try {
+      size({ ...waterDuty, constraints: { ...waterDuty.constraints, maxTubeLength_m: 0.6 } });
+      expect.unreachable();
+    } catch (e) {
+      expect((e as Error).message).toMatch(/× shell-aspect/);
+    }
+  });
+
+  it('a shell holding under 85 % of what its tubesheet takes is a finding (common practice)', () => {
+    const r = rate({
+      process: { fluid: 'water', pressure_Pa: 300000, massFlow_kg_s: 2, inletTemp_C: 75 },
+      boundary: { kind: 'coolant', fluid: 'water', pressure_Pa: 300000, massFlow_kg_s: 3, inletTemp_C: 25, shellInnerDiameter_m: 0.3048 },
+      geometry: { tubeOuterDiameter_m: 0.01905, tubeWall_m: 0.001245, tubeCount: 40, tubeLength_m: 3, tubePasses: 2 },
+    });
+    expect(r.shellFill).toBeLessThan(0.85);
+    expect(r.warnings.map((w) => w.code)).toContain('shell-partly-filled');
+  });
+});
+
 describe('rating with the process on either side (issue 10)', () => {
   const base = {
     process: { fluid: 'oil-vg46' as const, pressure_Pa: 500000, massFlow_kg_s: 1.2, inletTemp_C: 62 },
