@@ -182,7 +182,7 @@ function explain(ctx: DutyContext, chosen: Design[], rule: string | undefined, a
   const other = best.get(r.processSide === 'tubes' ? 'shell' : 'tubes');
   const where = r.processSide === 'tubes' ? 'in the tubes' : 'on the shell side';
   const kpa = (x: number | undefined) => `${((x ?? 0) / 1000).toFixed(0)} kPa`;
-  const shells = (r.shellsInSeries ?? 1) > 1 ? ` ${r.shellsInSeries} shells in series keep each shell's tubes within the length limit and F ≥ 0.75.` : '';
+  const shells = (r.shellsInSeries ?? 1) > 1 ? ` ${r.shellsInSeries} shells in series keep each shell's tubes within the length limit and L/D_s ≤ 15 with F ≥ 0.75.` : '';
   let why: string;
   if (other) {
     const pct = other.cost !== 0 ? Math.round((1 - r.cost / other.cost) * 100) : 0;
