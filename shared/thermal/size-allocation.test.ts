@@ -201,3 +201,37 @@ describe('baffles (issue 10)', () => {
     expect(p.inlet).toBeGreaterThanOrEqual(0.3 * 0.3 + 0.1 - 1e-9);
   });
 });
+
+describe('ranking preferences (common practice, domain brief 2.8)', () => {
+  /** An invented case-drain cooler: ISO VG 68 cooled by 30 % ethylene glycol, 3 m limit. */
+  const caseDrain = {
+    process: { fluid: 'oil-vg68' as const, pressure_Pa: 400000, massFlow_kg_s: 0.8, inletTemp_C: 65, outletTemp_C: 50 },
+    boundary: { kind: 'coolant' as const, fluid: 'ethylene-glycol-30' as const, pressure_Pa: 350000, massFlow_kg_s: 1.6, inletTemp_C: 30 },
+    constraints: { maxTubeLength_m: 3, maxPressureDrop_Pa: 70000, maxShellPressureDrop_Pa: 70000 },
+  };
+
+  it('a viscous oil that would be laminar in the tubes goes on the shell side even when the tube-side design is a little cheaper', () => {
+    const r = size(caseDrain);
+    expect(r.recommended.processSide).toBe('shell');
+    expect(r.recommended.rating.shellFluid).toBe('process');
+    // the oil-in-tubes alternative exists, laminar, at a lower U
+    const inTubes = r.candidates.filter((c) => c.processSide === 'tubes');
+    expect(inTubes.length).toBeGreaterThan(0);
+    for (const c of inTubes) expect(c.rating.overallU_W_m2K!).toBeLessThan(r.recommended.rating.overallU_W_m2K!);
+    // forced into the tubes it is still designed (a preference, not a limit)
+    const forced = size({ ...caseDrain, constraints: { ...caseDrain.constraints, processSide: 'tubes' as const } });
+    expect(forced.recommended.processSide).toBe('tubes');
+    expect(forced.recommended.rating.regime).toBe('laminar');
+  });
+
+  it('baffle spacing: the recommended design is not leaky (J_l ≥ 0.5) where a wider spacing in the TEMA window allows it', () => {
+    for (const duty of [oilDuty, waterDuty]) {
+      const d = size(duty).recommended;
+      const j = d.rating.shellCorrections!;
+      expect(j.Jl).toBeGreaterThanOrEqual(0.5);
+      const w = baffleSpacingWindow(d.shellInnerDiameter_m!, d.tubeOuterDiameter_m, d.tubeMaterial);
+      expect(d.baffleSpacing_m!).toBeGreaterThanOrEqual(w.min - 1e-9);
+      expect(d.baffleSpacing_m!).toBeLessThanOrEqual(w.max + 1e-9);
+    }
+  });
+});

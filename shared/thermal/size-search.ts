@@ -8,6 +8,7 @@
  */
 import type { ProcessSide, SizeRequest } from '../schemas/thermal';
 import { foulingFor } from './allocation';
+import { RE_LAMINAR_LIMIT } from './correlations/transition';
 import type { CostInput } from './cost-proxy';
 import { lmtdCorrectionShells, ntuShells } from './exchanger/arrangement';
 import { TUBE_WATER_VELOCITY_MAX, TUBE_WATER_VELOCITY_MIN } from './exchanger/checks';
@@ -56,12 +57,36 @@ export interface Pre {
 /** 0.15: rank penalty per velocity outside its window (a search preference, not a limit). */
 export const WINDOW_PENALTY = 0.15;
 
+/**
+ * 0.25: rank penalty for a liquid in laminar flow in the tubes when the search may put it on the
+ * shell side instead (domain brief 2.8, common practice: the viscous fluid goes on the shell side,
+ * where baffled crossflow is turbulent at Reynolds numbers where a tube is laminar; laminar tube-side
+ * coefficients are low, depend on the entrance correlation chosen and suffer most from fouling).
+ */
+export const LAMINAR_TUBE_PENALTY = 0.25;
+
+/** The ranking's cost: the cost plus its soft penalties (preferences, not limits). */
+export function rankOf(cost: number, windowFindings: number, laminarTube: boolean): number {
+  return cost + Math.abs(cost) * (WINDOW_PENALTY * windowFindings + (laminarTube ? LAMINAR_TUBE_PENALTY : 0));
+}
+
+/**
+ * 0.5: Bell–Delaware's leakage factor J_l below which a baffle spacing counts as leaky. Close spacing
+ * in a small shell lets the baffle-to-shell and tube-to-baffle leakage take half the crossflow
+ * (J_l ≈ 0.4); such a design leans on clearances the shop cannot hold tightly and loses most when the
+ * leakage paths foul. Typical J_l 0.7–0.8, product of the J's 0.5–0.7 for a well-designed unit
+ * (domain brief 2.8; common practice). The search tries spacings that are not leaky first.
+ */
+export const LEAKY_JL = 0.5;
+
 interface ShellOption {
   shell: ShellGeometry;
   h0: number;
   /** shell-side ΔP of one shell per metre of tube length at the nominal length, Pa/m */
   dpPerM: number;
   velocity: number;
+  /** Bell–Delaware's J_l below LEAKY_JL at this spacing */
+  leaky: boolean;
 }
 
 export interface SearchState {
@@ -129,7 +154,7 @@ export function search(st: SearchState, sides: ProcessSide[], lowScale: number, 
               const options = view ? shellOptions(bundle0, sh.innerDiameter_m, pitch, layout, view, method, c.maxTubeLength_m) : null;
               done.fill(0);
               let left = materials.length;
-              // closest spacing first: each material keeps the first spacing that meets every limit
+              // closest spacing that is not leaky first: each material keeps the first spacing that meets every limit
               for (let o = 0; o < (options ? options.count : 1); o++) {
                 const opt = options?.get(o);
                 bundle0.kWall = ref.conductivity;
@@ -149,6 +174,8 @@ export function search(st: SearchState, sides: ProcessSide[], lowScale: number, 
                   done[m] = 1;
                   left--;
                   const tubeV = tubeVelocity(bundle, tube.massFlow_kg_s, tubeBulk.density);
+                  const tubeRe = (4 * tube.massFlow_kg_s * passes) / (count * Math.PI * dInner * tubeBulk.viscosity);
+                  const laminarTube = sides.length > 1 && tube.fluid.phase === 'liquid' && tubeRe < RE_LAMINAR_LIMIT;
                   let findings = 0;
                   if (tube.aqueous && (tubeV < TUBE_WATER_VELOCITY_MIN || tubeV > TUBE_WATER_VELOCITY_MAX)) findings++;
                   if (opt && shellLiquid && (opt.velocity < SHELL_LIQUID_VELOCITY[0] || opt.velocity > SHELL_LIQUID_VELOCITY[1])) findings++;
@@ -159,7 +186,7 @@ export function search(st: SearchState, sides: ProcessSide[], lowScale: number, 
                   };
                   const cost = st.costOf(input);
                   st.pre.push({
-                    cost, rank: cost + Math.abs(cost) * WINDOW_PENALTY * findings, input, bundle: { ...bundle, length: r.length }, shell: opt?.shell, view,
+                    cost, rank: rankOf(cost, findings, laminarTube), input, bundle: { ...bundle, length: r.length }, shell: opt?.shell, view,
                     ntu: r.ntu, requiredLength: r.required, tubeDp: r.tubeDp, shellDp: r.shellDp, hIn: base.hIn, hOut: base.hOut, holds,
                   });
                 }
@@ -194,19 +221,17 @@ function ntuByShells(ctx: DutyContext, passes: number, maxN: number): number[] {
 function shellOptions(b: Bundle, dShell: number, pitch: number, layout: Layout, v: SideView, method: ReturnType<typeof shellMethod>, maxLength: number) {
   const spacings = searchBaffleSpacings(baffleSpacingWindow(dShell, b.dOuter, 'copper'));
   const nominal = Math.min(maxLength, Math.max(1, 8 * dShell));
-  const memo: ShellOption[] = [];
+  // every spacing rated once (a shell-side call is well under a microsecond), then ordered: the
+  // closest spacing that is not leaky first, leaky ones (J_l < LEAKY_JL) only after all others
+  const all: ShellOption[] = spacings.map((spacing) => {
+    const shell: ShellGeometry = { dShell, baffleSpacing: spacing, baffleCut: DEFAULT_BAFFLE_CUT, pitch, layout };
+    const r = method.rate(prepareFor({ ...b, length: nominal }, shell), v.shell.massFlow_kg_s, v.shellBulk, v.shellBulk.viscosity);
+    return { shell, h0: r.h, dpPerM: r.dp.total_Pa / nominal, velocity: r.velocity, leaky: r.corrections.Jl < LEAKY_JL };
+  });
+  const ordered = [...all.filter((o) => !o.leaky), ...all.filter((o) => o.leaky)];
   return {
-    count: spacings.length,
-    /** rated on first use: most geometries stop at the first or second spacing */
-    get(i: number): ShellOption {
-      let o = memo[i];
-      if (!o) {
-        const shell: ShellGeometry = { dShell, baffleSpacing: spacings[i]!, baffleCut: DEFAULT_BAFFLE_CUT, pitch, layout };
-        const r = method.rate(prepareFor({ ...b, length: nominal }, shell), v.shell.massFlow_kg_s, v.shellBulk, v.shellBulk.viscosity);
-        o = memo[i] = { shell, h0: r.h, dpPerM: r.dp.total_Pa / nominal, velocity: r.velocity };
-      }
-      return o;
-    },
+    count: ordered.length,
+    get: (i: number): ShellOption => ordered[i]!,
   };
 }
 

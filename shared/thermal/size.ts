@@ -19,7 +19,7 @@ import { SHELL_ASPECT } from './exchanger/shell-side';
 import { bafflePlan, SEARCH_BAFFLE_CUTS } from './geometry/baffles';
 import { dutyContext } from './size-duty';
 import { distinct, distinctKey, spanning } from './size-pick';
-import { search, searchShells, WINDOW_PENALTY, type Pre, type Reason, type SearchState } from './size-search';
+import { rankOf, search, searchShells, type Pre, type Reason, type SearchState } from './size-search';
 
 export interface SizeOptions {
   /** ranks feasible designs, lower is better; default `costProxy` */
@@ -75,7 +75,9 @@ export function sizeParsed(req: SizeRequest, opts: SizeOptions = {}): SizeResult
     const d = rateCandidate(st, refineCut(st, p));
     if (!d) continue;
     const findings = d.rating.warnings.filter((w) => /velocity-(low|high)$/.test(w.code)).length;
-    rated.push({ d, rank: d.cost + Math.abs(d.cost) * WINDOW_PENALTY * findings, key: distinctKey(d) });
+    const tubeLiquid = ((d.processSide ?? 'tubes') === 'tubes' ? ctx.s : ctx.coolant?.c ?? ctx.s).fluid.phase === 'liquid';
+    const laminarTube = alloc.sides.length > 1 && tubeLiquid && d.rating.regime === 'laminar';
+    rated.push({ d, rank: rankOf(d.cost, findings, laminarTube), key: distinctKey(d) });
   }
   if (rated.length === 0) throw noFeasible(st.reasons, st.evaluated);
   const sorted = distinct(rated).map((r) => ({ ...r, side: r.d.processSide ?? 'tubes', shells: r.d.shellsInSeries ?? 1, cost: r.d.cost, tubeDp: r.d.rating.pressureDrop.total_Pa, shellDp: r.d.rating.shellPressureDrop_Pa ?? 0, length: r.d.tubeLength_m }));
