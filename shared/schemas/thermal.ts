@@ -102,6 +102,16 @@ export const intakeSchema = z.object({
   pressure_Pa: pressure('Intake pressure'),
 });
 
+/**
+ * A stream's design pressure (absolute, like every pressure here) and design temperature, for the
+ * walls (issue 11). Optional: by default the operating pressure plus 10 % (at least 1 bar more) and
+ * the process inlet temperature plus 25 K (shared/thermal/checks/walls.ts).
+ */
+export const designPointSchema = z.object({
+  pressure_Pa: pressure('Design pressure'),
+  temp_C: temperature('Design temperature'),
+});
+
 /** The stream inside the tubes. `pressure_Pa` absolute. */
 export const processStreamSchema = z.object({
   fluid: fluidRefSchema,
@@ -109,6 +119,7 @@ export const processStreamSchema = z.object({
   massFlow_kg_s: massFlow('Process mass flow'),
   inletTemp_C: temperature('Process inlet temperature'),
   intake: intakeSchema.optional(),
+  design: designPointSchema.optional(),
 });
 
 export const layoutSchema = z.union([z.literal(30), z.literal(60), z.literal(90), z.literal(45)]);
@@ -132,6 +143,7 @@ export const coolantBoundarySchema = z.object({
   layout: layoutSchema.optional(),
   foulingInside_m2K_W: fouling('Tube-side fouling resistance').optional(),
   foulingOutside_m2K_W: fouling('Shell-side fouling resistance').optional(),
+  design: designPointSchema.optional(),
 });
 
 export const boundarySchema = z.discriminatedUnion('kind', [wallBoundarySchema, coolantBoundarySchema]);
@@ -305,6 +317,13 @@ export const designSchema = z.object({
   allocationReason: z.string().optional(),
   /** on the recommended design: why it won */
   recommendedReason: z.string().optional(),
+  // issue 11, walls for pressure (shared/thermal/checks/walls.ts); absent on designs stored before it
+  /** least tube wall for the tube side's design pressure + corrosion allowance, at least the minimum gauge, m */
+  tubeWallRequired_m: num.optional(),
+  /** least shell wall for the shell side's design pressure + corrosion allowance, m */
+  shellWallRequired_m: num.optional(),
+  /** the shell's wall: the pipe's STD wall or the rolled plate that covers the pressure, m */
+  shellWall_m: num.optional(),
   /** total over all shells */
   area_m2: num,
   requiredLength_m: num,
