@@ -232,6 +232,33 @@ export const warningSchema = z.object({ code: z.string(), message: z.string() })
 
 export const profilePointSchema = z.object({ x_m: num, process_C: num, coolant_C: num.optional() });
 
+/** One screened span: its worst tube (a window tube, held at every second baffle) at that place. */
+export const vibrationSpanSchema = z.object({
+  where: z.enum(['inlet', 'central', 'outlet']),
+  span_m: num,
+  crossflowVelocity_m_s: num,
+  criticalVelocity_m_s: num,
+  ok: z.boolean(),
+  ends: z.enum(['pinned-pinned', 'clamped-pinned', 'clamped-clamped']).optional(),
+  tube: z.enum(['window', 'baffled']).optional(),
+  velocityRatio: num.optional(),
+  naturalFrequency_Hz: num.optional(),
+  vortexFrequency_Hz: z.tuple([num, num]).optional(),
+  buffetingFrequency_Hz: num.optional(),
+  fluidElasticOk: z.boolean().optional(),
+  vortexOk: z.boolean().optional(),
+});
+
+export const vibrationSchema = z.object({
+  spans: z.array(vibrationSpanSchema),
+  ok: z.boolean(),
+  connorsK: num.optional(),
+  logDecrement: num.optional(),
+  addedMassCoefficient: num.optional(),
+  massPerLength_kg_m: num.optional(),
+});
+export type Vibration = z.infer<typeof vibrationSchema>;
+
 export const rateResultSchema = z.object({
   outletTemp_C: num,
   duty_W: num,
@@ -289,6 +316,8 @@ export const rateResultSchema = z.object({
   /** fouling resistances used, m²K/W: the request's, else each fluid's default */
   foulingTube_m2K_W: num.optional(),
   foulingShell_m2K_W: num.optional(),
+  /** issue 11: flow-induced vibration screen of the bundle (shared/thermal/checks/vibration.ts), coolant boundary only */
+  vibration: vibrationSchema.optional(),
 });
 export type RateResult = z.infer<typeof rateResultSchema>;
 
