@@ -106,6 +106,7 @@ export function rateParsed(req: RateRequest, opts: RateOptions = {}): RateResult
     shells: req.geometry.shellsInSeries ?? 1,
     method: req.shellMethod,
     holds: holds >= b.count ? holds : undefined,
+    tubeMaterial: req.geometry.tubeMaterial,
   });
   if (req.boundary.shellInnerDiameter_m !== undefined) {
     if (holds < b.count) r.warnings.push({ code: 'shell-too-small', message: `A ${Math.round(shell.dShell * 1000)} mm shell holds ${holds} tubes at this pitch and layout, fewer than the ${b.count} rated.` });

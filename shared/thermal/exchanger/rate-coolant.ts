@@ -8,6 +8,7 @@
  * beside the chosen method as a second opinion.
  */
 import type { ProcessSide, RateResult, ShellMethod } from '../../schemas/thermal';
+import { screenVibration, type VibrationCheck } from '../checks/vibration';
 import type { CorrelationChoice } from '../correlations/select';
 import { ThermalInputError } from '../errors';
 import { bafflePlan } from '../geometry/baffles';
@@ -34,6 +35,20 @@ export interface Arrangement {
   method?: ShellMethod;
   /** tubes the laid-out tubesheet holds, for the fill finding */
   holds?: number;
+  /** tube material id, for the vibration screen's modulus and density (default carbon steel) */
+  tubeMaterial?: string;
+}
+
+/**
+ * The vibration screen of one shell (checks/vibration.ts): the crossflow (gap) velocity at the
+ * central spacing is the shell stream over Bell–Delaware's S_m, whichever method rated the shell.
+ */
+export function vibrationOf(b: Bundle, shell: ShellGeometry, prepared: PreparedShell, shellMassFlow: number, shellDensity: number, tubeDensity: number, shellLiquid: boolean, tubeMaterial?: string): VibrationCheck {
+  return screenVibration({
+    dOuter: b.dOuter, dInner: b.dInner, tubeMaterial, layout: shell.layout, pitch: shell.pitch, tubeLength: b.length,
+    centralSpacing: prepared.baffleSpacing, inletSpacing: prepared.inletSpacing, outletSpacing: prepared.outletSpacing, baffles: prepared.baffles,
+    centralVelocity_m_s: shellMassFlow / (shellDensity * prepared.sm), shellDensity, tubeFluidDensity: tubeDensity, shellLiquid,
+  });
 }
 
 /** One shell's geometry for the shell-side methods, with the baffle plan the nozzles need. */
@@ -97,10 +112,13 @@ export function rateCoolant(
   const kern = kernMethod.rate(prepared, shellStream.massFlow_kg_s, st.shellBulk, st.muWallShell);
   const sd = st.shell;
   const fill = arr.holds ? b.count / arr.holds : undefined;
+  const shellLiquid = shellStream.fluid.phase === 'liquid';
+  const vib = vibrationOf(b, shell, prepared, shellStream.massFlow_kg_s, st.shellBulk.density, st.tubeBulk.density, shellLiquid, arr.tubeMaterial);
   const warnings = [
     ...conv.warnings,
     ...tubeWarnings(tube, b, velocity, N * dp1.total_Pa),
-    ...shellWarnings(shell, sd, method, shellStream.fluid.phase === 'liquid', b.length, fill),
+    ...shellWarnings(shell, sd, method, shellLiquid, b.length, fill),
+    ...vib.findings,
   ];
   const n = opts.profilePoints ?? 21;
   const hotOut = tHout;
@@ -149,6 +167,7 @@ export function rateCoolant(
     baffleCount: prepared.baffles,
     foulingTube_m2K_W: fouling.inside,
     foulingShell_m2K_W: fouling.outside,
+    vibration: { spans: vib.spans, ok: vib.ok, connorsK: vib.connorsK, logDecrement: vib.logDecrement, addedMassCoefficient: vib.addedMassCoefficient, massPerLength_kg_m: vib.massPerLength_kg_m },
   };
   if (methodId === 'bell-delaware') result.shellCorrections = sd.corrections;
   if (fill !== undefined) result.shellFill = fill;
