@@ -8,7 +8,7 @@
  */
 import { z } from 'zod';
 import { correlationChoices } from '../thermal/correlations/select';
-import { fluidIds } from '../thermal/fluids/registry';
+import { fluidIds, unknownFluidProblem } from '../thermal/fluids/registry';
 import { tubeMaterialIds } from '../thermal/geometry/materials';
 
 const num = z.number();
@@ -79,7 +79,13 @@ function choices<T extends z.ZodType>(item: T, what: string) {
     .transform((xs) => [...new Set(xs)]);
 }
 
-export const fluidIdSchema = z.enum(fluidIds);
+/**
+ * A library fluid id. Glycol–water mixtures: `ethylene-glycol-<p>` / `propylene-glycol-<p>` with
+ * p = 10, 15, …, 60 % glycol by mass; a strength outside that is refused naming the range.
+ */
+export const fluidIdSchema = z.enum(fluidIds, {
+  error: (iss) => (typeof iss.input === 'string' ? (unknownFluidProblem(iss.input) ?? undefined) : undefined),
+});
 
 /** A customer's own constant properties, SI. */
 export const constantFluidSchema = z.object({
@@ -91,7 +97,10 @@ export const constantFluidSchema = z.object({
   }),
 });
 
-export const fluidRefSchema = z.union([fluidIdSchema, constantFluidSchema]);
+export const fluidRefSchema = z.union([fluidIdSchema, constantFluidSchema], {
+  // a string that is no library id: say why (unknown, or a glycol strength outside 10–60 %)
+  error: (iss) => (typeof iss.input === 'string' ? (unknownFluidProblem(iss.input) ?? undefined) : undefined),
+});
 export type FluidRef = z.infer<typeof fluidRefSchema>;
 
 /** Intake air of a compressor (`air-moist`): sets the water the air carries. */

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { getFluid, isFluidId, listFluids } from '../../../shared/thermal/fluids';
-import { notFound } from '../../lib/errors';
+import { getFluid, isFluidId, listFluids, parseGlycolId, unknownFluidProblem } from '../../../shared/thermal/fluids';
+import { notFound, unprocessable } from '../../lib/errors';
 import { parse } from '../../lib/validate';
 
 const finite = (what: string) =>
@@ -21,7 +21,14 @@ export function fluidsRouter(): Router {
   });
   r.get('/:id/properties', (req, res) => {
     const id = String(req.params.id);
-    if (!isFluidId(id)) throw notFound(`No fluid '${id}' in the library; GET /api/fluids lists them.`);
+    if (!isFluidId(id)) {
+      // a glycol–water id whose strength is outside 10–60 % or off the 5 % steps: say so (422 on `id`)
+      if (parseGlycolId(id)) {
+        const why = unknownFluidProblem(id)!;
+        throw unprocessable(why, 'fluid-range', { id: why });
+      }
+      throw notFound(`No fluid '${id}' in the library; GET /api/fluids lists them.`);
+    }
     const { temp_C, pressure_Pa } = parse(propertiesQuery, req.query, 'query');
     const p = getFluid(id).properties(temp_C, pressure_Pa); // outside its data: ThermalInputError → 422
     res.json({

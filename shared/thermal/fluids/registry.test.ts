@@ -44,6 +44,17 @@ describe('fluid registry', () => {
     expect(() => getFluid('mercury')).toThrow(expect.objectContaining({ field: 'process.fluid' }));
   });
 
+  it('glycol ids: 10…60 % in steps of 5 exist; a strength outside or off the steps → fluid-range naming the field', () => {
+    expect(getFluid('ethylene-glycol-40').name).toBe('Ethylene glycol–water, 40 % by mass');
+    expect(listFluids().map((f) => f.id)).toEqual(expect.arrayContaining(['ethylene-glycol-10', 'propylene-glycol-60']));
+    expect(() => getFluid('ethylene-glycol-70', 'boundary.fluid')).toThrow(
+      expect.objectContaining({ code: 'fluid-range', field: 'boundary.fluid', message: expect.stringMatching(/10 to 60 %/) }),
+    );
+    expect(() => getFluid('propylene-glycol-42')).toThrow(
+      expect.objectContaining({ code: 'fluid-range', message: expect.stringMatching(/propylene-glycol-40 or propylene-glycol-45/) }),
+    );
+  });
+
   it('fluidIds works as a zod enum', () => {
     const schema = z.enum(fluidIds);
     expect(schema.parse('oil-vg46')).toBe('oil-vg46');

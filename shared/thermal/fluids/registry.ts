@@ -3,20 +3,20 @@ import { ThermalInputError } from '../errors';
 import { air } from './air';
 import { airMoist } from './air-moist';
 import { CONSTANT_FLUID_ID } from './constant';
-import { ethyleneGlycol30, ethyleneGlycol50, propyleneGlycol30, propyleneGlycol50 } from './glycols';
+import { GLYCOL_MAX_PERCENT, GLYCOL_MIN_PERCENT, glycolFluidIds, glycolFluids, glycolStrengthProblem, parseGlycolId } from './glycols';
 import { oilVg32, oilVg46, oilVg68 } from './oils';
 import type { Fluid, FluidInfo } from './types';
 import { water } from './water';
 
-/** Ids of the library's fluids, usable as `z.enum(fluidIds)`. */
+/**
+ * Ids of the library's fluids, usable as `z.enum(fluidIds)`. Glycol–water mixtures are
+ * `ethylene-glycol-<p>` / `propylene-glycol-<p>` for p = 10, 15, …, 60 % glycol by mass (./glycols).
+ */
 export const fluidIds = [
   'water',
   'air',
   'air-moist',
-  'ethylene-glycol-30',
-  'ethylene-glycol-50',
-  'propylene-glycol-30',
-  'propylene-glycol-50',
+  ...glycolFluidIds,
   'oil-vg32',
   'oil-vg46',
   'oil-vg68',
@@ -31,10 +31,7 @@ const FLUIDS: Record<FluidId, Fluid> = {
   water,
   air,
   'air-moist': airMoist,
-  'ethylene-glycol-30': ethyleneGlycol30,
-  'ethylene-glycol-50': ethyleneGlycol50,
-  'propylene-glycol-30': propyleneGlycol30,
-  'propylene-glycol-50': propyleneGlycol50,
+  ...glycolFluids,
   'oil-vg32': oilVg32,
   'oil-vg46': oilVg46,
   'oil-vg68': oilVg68,
@@ -44,15 +41,39 @@ export function isFluidId(id: string): id is FluidId {
   return Object.prototype.hasOwnProperty.call(FLUIDS, id);
 }
 
-/** The library fluid with this id; unknown id → ThermalInputError `unknown-fluid` on `field`. */
+/** The known ids in words (the glycol strengths as a range, not 22 ids). */
+export const fluidIdsInWords =
+  `water, air, air-moist, ethylene-glycol-<p> and propylene-glycol-<p> (p = ${GLYCOL_MIN_PERCENT}, ` +
+  `${GLYCOL_MIN_PERCENT + 5}, …, ${GLYCOL_MAX_PERCENT} % glycol by mass), oil-vg32, oil-vg46, oil-vg68`;
+
+/**
+ * Why `id` is not a library fluid, in words (a glycol strength outside the data or off the 5 % steps
+ * is named as such), or null when it is one.
+ */
+export function unknownFluidProblem(id: string): string | null {
+  if (isFluidId(id)) return null;
+  const glycol = parseGlycolId(id);
+  if (glycol) {
+    const range = glycolStrengthProblem(glycol.kind, glycol.massPercent);
+    if (range) return range;
+    const below = Math.floor(glycol.massPercent / 5) * 5;
+    return (
+      `'${id}': the library lists glycol strengths in steps of 5 % by mass; choose ` +
+      `${glycol.kind}-glycol-${below} or ${glycol.kind}-glycol-${below + 5}.`
+    );
+  }
+  const hint = id === CONSTANT_FLUID_ID ? ' A constant-properties fluid needs its values (constantFluid).' : '';
+  return `Unknown fluid '${id}'. Known fluids: ${fluidIdsInWords}.${hint}`;
+}
+
+/**
+ * The library fluid with this id; unknown id → ThermalInputError on `field`: `fluid-range` for a glycol
+ * strength outside the data or off the steps, `unknown-fluid` otherwise.
+ */
 export function getFluid(id: string, field = 'process.fluid'): Fluid {
   if (isFluidId(id)) return FLUIDS[id];
-  const hint = id === CONSTANT_FLUID_ID ? ' A constant-properties fluid needs its values (constantFluid).' : '';
-  throw new ThermalInputError(
-    'unknown-fluid',
-    `Unknown fluid '${id}'. Known fluids: ${fluidIds.join(', ')}.${hint}`,
-    field,
-  );
+  const code = parseGlycolId(id) ? 'fluid-range' : 'unknown-fluid';
+  throw new ThermalInputError(code, unknownFluidProblem(id)!, field);
 }
 
 /** Plain descriptions of the library's fluids (fresh objects, safe to serialise or change). */
