@@ -7,6 +7,7 @@
 import type { Design, ProcessSide, RateRequest, RateResult, SizeRequest } from '../schemas/thermal';
 import { allocationReason, foulingFor } from './allocation';
 import { costProxy, type CostInput } from './cost-proxy';
+import { checkWalls, designWallFields, wallSides } from './checks/walls';
 import { ThermalInputError } from './errors';
 import { defaultBaffleSpacing } from './exchanger/shell-side';
 import { resolveStream } from './exchanger/streams';
@@ -146,12 +147,16 @@ export function evaluateDesign(duty: SizeRequest, g: GeometryChoice, costOf: (d:
         }
       : {}),
   };
+  // walls for pressure: a hand-set wall thinner than its side needs keeps the design, with the hard finding
+  const walls = checkWalls(base, wallSides(duty, base.processSide));
+  rating.warnings.push(...walls.findings);
   const allocation =
     duty.boundary.kind === 'coolant'
       ? allocationReason(resolveStream(duty.process, 'process'), resolveStream(duty.boundary, 'boundary'), { side: base.processSide, tubeH: rating.htc_W_m2K, shellH: rating.shellHtc_W_m2K ?? 0, tubeRe: rating.reynolds })
       : 'The process is in the tubes: a wall boundary (a bath or a condensing/boiling shell side) cools the tubes.';
   return {
     ...base,
+    ...designWallFields(walls),
     area_m2: rating.area_m2,
     // an unreachable target is reported as a margin of −100 % with the warning above
     requiredLength_m: reachable ? required : g.tubeLength_m * 100,

@@ -17,6 +17,7 @@ import { requiredLengthCoolant, requiredLengthWall, sideView, type DutyContext, 
 import { shellMethod } from './exchanger/shell-methods';
 import { SHELL_ASPECT, SHELL_LIQUID_VELOCITY, type ShellGeometry } from './exchanger/shell-side';
 import { tubePressureDrop, tubeVelocity, type Bundle } from './exchanger/tube-side';
+import { checkWalls, shellWallCheck, wallSides } from './checks/walls';
 import { baffleSpacingWindow, DEFAULT_BAFFLE_CUT, searchBaffleSpacings } from './geometry/baffles';
 import { tubeCountInShell, type Layout } from './geometry/layout';
 import { tubeMaterial } from './geometry/materials';
@@ -28,7 +29,7 @@ export const DEFAULT_MATERIALS = ['carbon-steel', 'stainless-304', 'copper', 'cu
 export const DEFAULT_LAYOUTS: Layout[] = [30, 60, 90, 45];
 export const DEFAULT_PASSES = [1, 2, 4];
 
-export type Reason = 'length' | 'pressure-drop' | 'shell-pressure-drop' | 'lmtd-correction' | 'shell-size' | 'shell-aspect';
+export type Reason = 'length' | 'pressure-drop' | 'shell-pressure-drop' | 'lmtd-correction' | 'shell-size' | 'shell-aspect' | 'wall';
 
 export type PreInput = CostInput & {
   tubePasses: number; layout: Layout; tubePitch_m: number; shellLabel: string; tubeWallLabel: string;
@@ -136,6 +137,13 @@ export function search(st: SearchState, sides: ProcessSide[], lowScale: number, 
     const ref = mats[0]!;
     const done = new Uint8Array(materials.length);
     const scratch: Bundle = { dOuter: 0, dInner: 0, count: 0, length: 0, passes: 1, roughness: 1.5e-6, kWall: 50, copperAlloy: false };
+    // walls for pressure (checks/walls.ts): a gauge or a pipe shell too thin for its side is not offered
+    const ws = wallSides(req, side);
+    const shellWalls = new Map<number, number | null>();
+    const shellWallOf = (sh: ShellList[number]) => {
+      if (!shellWalls.has(sh.innerDiameter_m)) { const r = shellWallCheck(sh, ws.shell); shellWalls.set(sh.innerDiameter_m, r.ok ? r.wall_m : null); }
+      return shellWalls.get(sh.innerDiameter_m)!;
+    };
     for (const passes of c.tubePasses ?? DEFAULT_PASSES) {
       const ntus = ntuByShells(ctx, passes, maxN);
       if (!ntus.some(Number.isFinite)) { st.reasons['lmtd-correction']++; continue; }
@@ -149,11 +157,16 @@ export function search(st: SearchState, sides: ProcessSide[], lowScale: number, 
             if (dInner <= 0) continue;
             const fitting = shellsInWindow(list, countOf, passes, dInner, window, lowScale, prevScale);
             if (fitting.length === 0) { st.reasons['shell-size']++; continue; }
+            const thin = mats.map((m) => !checkWalls({ tubeOuterDiameter_m: od, tubeWall_m: wall.wall_m, tubeWallLabel: wall.label, tubeMaterial: m.id }, ws).ok);
+            if (thin.every(Boolean)) { st.reasons.wall++; continue; }
             for (const { sh, count, holds } of fitting) {
+              const shellWall = view ? shellWallOf(sh) : sh.wall_m;
+              if (shellWall === null) { st.reasons.wall++; continue; }
               const bundle0: Bundle = { dOuter: od, dInner, count, length: 3, passes, roughness: 1.5e-6, kWall: 50, copperAlloy: false };
               const options = view ? shellOptions(bundle0, sh.innerDiameter_m, pitch, layout, view, method, c.maxTubeLength_m) : null;
               done.fill(0);
               let left = materials.length;
+              for (let m = 0; m < materials.length; m++) if (thin[m]) { done[m] = 1; left--; }
               // closest spacing that is not leaky first: each material keeps the first spacing that meets every limit
               for (let o = 0; o < (options ? options.count : 1); o++) {
                 const opt = options?.get(o);
@@ -181,7 +194,7 @@ export function search(st: SearchState, sides: ProcessSide[], lowScale: number, 
                   if (opt && shellLiquid && (opt.velocity < SHELL_LIQUID_VELOCITY[0] || opt.velocity > SHELL_LIQUID_VELOCITY[1])) findings++;
                   const input: PreInput = {
                     tubeCount: count, tubeLength_m: r.length, tubeOuterDiameter_m: od, tubeWall_m: wall.wall_m, tubeWallLabel: wall.label, tubeMaterial: matId,
-                    shellInnerDiameter_m: sh.innerDiameter_m, shellWall_m: sh.wall_m, shellLabel: sh.label, baffleSpacing_m: opt?.shell.baffleSpacing,
+                    shellInnerDiameter_m: sh.innerDiameter_m, shellWall_m: shellWall, shellLabel: sh.label, baffleSpacing_m: opt?.shell.baffleSpacing,
                     baffleCut: opt?.shell.baffleCut ?? DEFAULT_BAFFLE_CUT, tubePasses: passes, layout, tubePitch_m: pitch, processSide: side, shellsInSeries: r.shells,
                   };
                   const cost = st.costOf(input);

@@ -11,6 +11,7 @@ import { sizeRequestSchema } from '../schemas/thermal';
 import { allocationReason, processSides } from './allocation';
 import { costProxy, type CostInput } from './cost-proxy';
 import { ThermalInputError, type ThermalWarning } from './errors';
+import { checkWalls, designWallFields, wallSides } from './checks/walls';
 import { prepareFor, rateCoolant } from './exchanger/rate-coolant';
 import { rateWall } from './exchanger/rate-wall';
 import { requiredLengthCoolant, type DutyContext } from './exchanger/required-length';
@@ -41,6 +42,7 @@ const RELAX: Record<Reason, [string, string]> = {
   'shell-pressure-drop': ['constraints.maxShellPressureDrop_Pa', 'the shell-side pressure-drop limit (it defaults to the tube-side limit), or lower the shell-side flow'],
   'lmtd-correction': ['constraints.tubePasses', 'the pass arrangement: allow 1 tube pass (counterflow) or more shells in series, or accept a larger temperature approach'],
   'shell-size': ['constraints.maxShellInnerDiameter_m', 'the maximum shell diameter'],
+  wall: ['process.design', 'the design pressure (or allow other tube materials, gauges or rolled shells): the walls on offer are too thin for it (ASME VIII-1 UG-27 with corrosion allowance and minimum gauge)'],
   'shell-aspect': ['constraints.maxTubeLength_m', `the length: one shell's tube length over its diameter stays within ${SHELL_ASPECT[0]}–${SHELL_ASPECT[1]} (common practice); allow longer tubes or more shells in series`],
 };
 
@@ -49,7 +51,7 @@ export function sizeParsed(req: SizeRequest, opts: SizeOptions = {}): SizeResult
   const ctx = dutyContext(req);
   const st: SearchState = {
     req, ctx, step: c.lengthStep_m ?? opts.lengthStep_m ?? DEFAULT_LENGTH_STEP_M, costOf: opts.costOf ?? costProxy,
-    reasons: { length: 0, 'pressure-drop': 0, 'shell-pressure-drop': 0, 'lmtd-correction': 0, 'shell-size': 0, 'shell-aspect': 0 }, evaluated: 0, pre: [],
+    reasons: { length: 0, 'pressure-drop': 0, 'shell-pressure-drop': 0, 'lmtd-correction': 0, 'shell-size': 0, 'shell-aspect': 0, wall: 0 }, evaluated: 0, pre: [],
   };
   if (searchShells(req).length === 0) {
     throw new ThermalInputError('no-feasible-design', 'No standard shell is as small as the maximum shell diameter.', 'constraints.maxShellInnerDiameter_m');
@@ -153,10 +155,14 @@ function rateCandidate(st: SearchState, p: Pre): Design | null {
     const area = p.shell ? rating.area_m2 : bundle.count * Math.PI * bundle.dInner * bundle.length;
     const plan = p.shell ? bafflePlan(bundle.length, p.shell.baffleSpacing, p.shell.dShell) : undefined;
     const input = { ...p.input, tubeLength_m: bundle.length, baffleCount: plan?.count };
+    const walls = checkWalls(input, wallSides(req, p.input.processSide));
+    if (!walls.ok) { st.reasons.wall++; return null; }
+    rating.warnings.push(...walls.findings);
     const { shellWall_m: _w, ...design } = input;
     void _w;
     return {
       ...design,
+      ...designWallFields(walls),
       ...(plan ? { inletBaffleSpacing_m: plan.inlet, outletBaffleSpacing_m: plan.outlet } : { baffleCut: undefined, baffleCount: undefined }),
       area_m2: area, requiredLength_m: p.requiredLength, overSurface_pct: (bundle.length / p.requiredLength - 1) * 100, cost: st.costOf(input), rating,
     };

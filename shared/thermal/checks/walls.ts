@@ -228,3 +228,9 @@ export function checkWalls(g: WallGeometry, sides: { tube: WallSide; shell: Wall
 
 /** Codes of the wall check's hard findings. */
 export const WALL_HARD_CODES = ['tube-wall-thin', 'shell-wall-thin'];
+
+/** The design's wall fields from a check (finite values only: an impossible wall is a finding, not a number). */
+export function designWallFields(w: WallCheck): { tubeWallRequired_m?: number; shellWallRequired_m?: number; shellWall_m?: number } {
+  const f = (x: number | undefined) => (x !== undefined && Number.isFinite(x) ? x : undefined);
+  return { tubeWallRequired_m: f(w.tubeWallRequired_m), shellWallRequired_m: f(w.shellWallRequired_m), shellWall_m: f(w.shellWall_m) };
+}
