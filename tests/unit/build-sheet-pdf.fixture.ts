@@ -32,7 +32,11 @@ export const glycolDuty = sizeRequestSchema.parse({
  */
 export const HYDROTEST = { tubeSide_Pa: 650_000, shellSide_Pa: 520_000 };
 
-export const HYDROTEST_BASIS = 'ASME VIII-1 UG-99(b): 1.3 × design pressure × stress ratio (ratio taken as 1); design pressure estimated as the larger of 1.1 × and 1 bar above the operating gauge pressure of the fluid on that side (memory; the responsible engineer confirms the MAWP and the test pressure).';
+/** The basis in words (shared/thermal/checks/walls.ts): carbon-steel parts, stress ratio 1.00; design temperature 80 + 25 = 105 °C. */
+export const HYDROTEST_BASIS =
+  "ASME VIII-1 UG-99(b): 1.3 × MAWP × stress ratio (the lowest S at test over S at design temperature of the side's materials, ASME II-D, memory), the MAWP taken as the design pressure. " +
+  'Tube side: 1.3 × 5.0 bar(g) × 1.00 = 6.5 bar(g) (design 5.0 bar(g) at 105 °C, default: the operating gauge pressure + 10 %, at least + 1 bar, and the process inlet + 25 K); ' +
+  'shell side: 1.3 × 4.0 bar(g) × 1.00 = 5.2 bar(g) (design 4.0 bar(g) at 105 °C, default: the operating gauge pressure + 10 %, at least + 1 bar, and the process inlet + 25 K). The responsible engineer confirms the MAWP and the test pressure.';
 
 export const ORDER: BuildSheet['order'] = { id: 'ord_test', number: 'O-2026-0017', quoteNumber: 'Q-2026-0051', customer: 'Harwick Process Cooling', poNumber: 'HPC-PO-88412', needBy: '2026-07-15', quantity: 1, status: 'released' };
 

@@ -20,15 +20,9 @@ import { fluidName } from '../../lib/pdf/duty-rows';
 import type { OrderDeps } from './deps';
 import { drillingPattern } from './drilling';
 import { getOrder } from './service';
+import { hydrotest, wallSides } from '../../../shared/thermal/checks/walls';
 
 const ATM = 101_325;
-/** 1.3: ASME VIII-1 UG-99(b) hydrostatic test factor, stress ratio taken as 1 (memory; verify against the edition in force). */
-const HYDROTEST_FACTOR = 1.3;
-/**
- * Design pressure from the operating pressure: 10 % above it and at least 1 bar above it (common
- * practice). The responsible engineer sets the MAWP; this sheet shows the estimate it was built on.
- */
-const designPressure = (operatingGauge_Pa: number) => Math.max(operatingGauge_Pa * 1.1, operatingGauge_Pa + 1e5);
 
 export const SHEET_CAUTIONS = [
   'Pressure equipment: dimensions, thicknesses and test pressures on this sheet are estimates from the quotation design.',
@@ -70,6 +64,8 @@ export function sheetFromDesign(src: { order: BuildSheet['order']; design: Desig
   const bom = billOfMaterials(d, book);
   const N = shellsOf(d);
   const sides = sidesOf(d, duty);
+  // test pressures from each side's design pressure (the duty's, else operating + margin): shared/thermal/checks/walls.ts
+  const test = hydrotest(d, wallSides(duty, processSideOf(d)));
   const nozzles = nozzleSizes(d, ds);
   const cut = d.tubeLength_m + book.tubeCutAllowance_m;
   const baffles = bafflesPerShell(d);
@@ -132,12 +128,12 @@ export function sheetFromDesign(src: { order: BuildSheet['order']; design: Desig
       ? 'Tubes expanded into grooved holes and seal-welded (common practice for this material)'
       : 'Tubes roller-expanded into holes with two grooves (common practice)',
     hydrotest: {
-      tubeSide_Pa: Math.round(HYDROTEST_FACTOR * designPressure(Math.max(sides.tube.pressure_Pa - ATM, 0))),
-      shellSide_Pa: Math.round(HYDROTEST_FACTOR * designPressure(Math.max(sides.shell.pressure_Pa - ATM, 0))),
+      tubeSide_Pa: Math.round(test.tube.test_Pa),
+      shellSide_Pa: Math.round(test.shell.test_Pa),
       tubeSideFluid: sides.tube.fluid,
       shellSideFluid: sides.shell.fluid,
       shells: N,
-      basis: 'ASME VIII-1 UG-99(b): 1.3 × design pressure × stress ratio (ratio taken as 1); design pressure estimated as the larger of 1.1 × and 1 bar above the operating gauge pressure of the fluid on that side (memory; the responsible engineer confirms the MAWP and the test pressure).',
+      basis: test.basis,
     },
     inspection: [
       'Material certificates of tubes, tubesheets, shell and nozzles checked against the bill of materials',

@@ -234,3 +234,44 @@ export function designWallFields(w: WallCheck): { tubeWallRequired_m?: number; s
   const f = (x: number | undefined) => (x !== undefined && Number.isFinite(x) ? x : undefined);
   return { tubeWallRequired_m: f(w.tubeWallRequired_m), shellWallRequired_m: f(w.shellWallRequired_m), shellWall_m: f(w.shellWall_m) };
 }
+
+/** 1.3: ASME VIII-1 UG-99(b) hydrostatic test factor (memory; verify against the edition in force). */
+export const HYDROTEST_FACTOR = 1.3;
+
+export interface HydrotestSide {
+  /** test gauge pressure, Pa */
+  test_Pa: number;
+  /** design gauge pressure taken as the MAWP, Pa */
+  design_Pa: number;
+  designTemp_C: number;
+  stated: boolean;
+  /** UG-99(b) stress ratio: the lowest S(test, 40 °C) / S(design temperature) of the side's materials */
+  stressRatio: number;
+}
+
+/**
+ * Hydrotest pressure of each side by ASME VIII-1 UG-99(b): 1.3 × MAWP × the lowest stress ratio of
+ * the side's materials (memory), the MAWP taken as the side's design pressure (the responsible
+ * engineer's calculation sets the real MAWP). The tubes are a pressure part of both sides; the
+ * channel and shell are carbon steel (SA-106 B / SA-516 70).
+ */
+export function hydrotest(g: { tubeMaterial: string; shellInnerDiameter_m?: number }, sides: { tube: WallSide; shell: WallSide }): { tube: HydrotestSide; shell: HydrotestSide; basis: string } {
+  const shellEntry = SHELL_STRESS[catalogueShell(g.shellInnerDiameter_m ?? 0)?.kind ?? 'rolled'];
+  const tubeEntry = TUBE_STRESS[g.tubeMaterial] ?? TUBE_STRESS['carbon-steel']!;
+  const ratio = (temp: number) => {
+    const r = [tubeEntry, shellEntry].map((e) => (allowableStress(e, 40) ?? 0) / (allowableStress(e, temp) ?? Infinity)).filter((x) => x > 0);
+    return r.length ? Math.max(1, Math.min(...r)) : 1;
+  };
+  const side = (s: WallSide): HydrotestSide => {
+    const k = ratio(s.design.temp_C);
+    return { test_Pa: HYDROTEST_FACTOR * s.design.gauge_Pa * k, design_Pa: s.design.gauge_Pa, designTemp_C: s.design.temp_C, stated: s.design.stated, stressRatio: k };
+  };
+  const tube = side(sides.tube);
+  const shell = side(sides.shell);
+  const words = (name: string, h: HydrotestSide) =>
+    `${name}: 1.3 × ${barg(h.design_Pa)} × ${h.stressRatio.toFixed(2)} = ${barg(h.test_Pa)} (design ${barg(h.design_Pa)} at ${h.designTemp_C.toFixed(0)} °C, ${h.stated ? 'as stated on the duty' : 'default: the operating gauge pressure + 10 %, at least + 1 bar, and the process inlet + 25 K'})`;
+  const basis =
+    `ASME VIII-1 UG-99(b): 1.3 × MAWP × stress ratio (the lowest S at test over S at design temperature of the side's materials, ASME II-D, memory), the MAWP taken as the design pressure. ` +
+    `${words('Tube side', tube)}; ${words('shell side', shell)}. The responsible engineer confirms the MAWP and the test pressure.`;
+  return { tube, shell, basis };
+}
