@@ -5,6 +5,7 @@
  * opinion and the correction factors). Old stored designs read as one shell, process in the tubes.
  */
 import type { Design, SizeRequest } from '../../../shared/schemas/thermal';
+import { wallSides } from '../../../shared/thermal/checks/walls';
 import { tubeMaterial } from '../../../shared/thermal/geometry/materials';
 import { tubeSizeOf } from '../../../shared/thermal/geometry/tubes';
 import type { UnitSystem } from '../../../shared/thermal/units';
@@ -69,10 +70,33 @@ export function designPairs(d: Design, units: UnitSystem, duty?: SizeRequest): [
     const cutLength = d.shellInnerDiameter_m !== undefined ? ` (${showQuantity(cut * d.shellInnerDiameter_m, 'length', units)})` : '';
     pairs.push(['Baffles', `${bafflesPerShell(d)} segmental${each}, cut ${formatNumber(cut * 100, 3)} % of the shell ID${cutLength}`]);
   }
+  pairs.push(...wallPairs(d, units, duty));
   const area = showQuantity(d.area_m2, 'area', units);
   pairs.push(['Heat-transfer area', n > 1 ? `${area} in all (${showQuantity(d.area_m2 / n, 'area', units)} per shell)` : area]);
   pairs.push(['Over-surface margin', `${formatNumber(d.overSurface_pct, 2)} %`]);
   return pairs;
+}
+
+/**
+ * Issue 11, walls for pressure: each side's design pressure and temperature (the duty's, else the
+ * default from the operating values, shared/thermal/checks/walls.ts) and the walls they need
+ * (ASME VIII-1 UG-27 with corrosion allowance; the tube at least the material's minimum gauge)
+ * beside the walls the design has. Designs stored before it carry no required walls: no wall row.
+ */
+export function wallPairs(d: Design, units: UnitSystem, duty?: SizeRequest): [string, string][] {
+  const out: [string, string][] = [];
+  const q = (v: number) => showQuantity(v, 'length', units);
+  if (duty) {
+    const sides = wallSides(duty, processSideOf(d));
+    const point = (s: typeof sides.tube) =>
+      `${showQuantity(s.design.pressure_Pa, 'pressure', units, { pressureBasis: 'gauge' })} at ${showQuantity(s.design.temp_C, 'temperature', units)}${s.design.stated ? '' : ' (default: operating + margin)'}`;
+    out.push(['Design pressure and temp.', `tube side ${point(sides.tube)}; shell side ${point(sides.shell)}`]);
+  }
+  if (d.tubeWallRequired_m !== undefined) {
+    const shell = d.shellWallRequired_m !== undefined && d.shellWall_m !== undefined ? `; shell ${q(d.shellWallRequired_m)} (wall ${q(d.shellWall_m)})` : '';
+    out.push(['Walls needed (UG-27)', `tube ${q(d.tubeWallRequired_m)} (wall ${q(d.tubeWall_m)})${shell}`]);
+  }
+  return out;
 }
 
 /** The design's reasons in words, each a sentence or two: why this allocation, why this design won. */
