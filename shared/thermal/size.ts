@@ -33,6 +33,8 @@ export interface SizeOptions {
 
 /** 0.1 m: default length step, a common cut-length increment for tube bundles (common practice). */
 export const DEFAULT_LENGTH_STEP_M = 0.1;
+/** 200: candidates rated beyond the spanning set when all of those fail the vibration screen (bounds the time). */
+const VIBRATION_RETRIES = 200;
 /** 12: alternatives returned by default (enough to span the trade-offs, few enough to read). */
 const DEFAULT_MAX_CANDIDATES = 12;
 
@@ -42,6 +44,7 @@ const RELAX: Record<Reason, [string, string]> = {
   'shell-pressure-drop': ['constraints.maxShellPressureDrop_Pa', 'the shell-side pressure-drop limit (it defaults to the tube-side limit), or lower the shell-side flow'],
   'lmtd-correction': ['constraints.tubePasses', 'the pass arrangement: allow 1 tube pass (counterflow) or more shells in series, or accept a larger temperature approach'],
   'shell-size': ['constraints.maxShellInnerDiameter_m', 'the maximum shell diameter'],
+  vibration: ['constraints.maxShellPressureDrop_Pa', 'the shell-side pressure-drop limit (closer baffles shorten the tube spans) or lower the shell-side flow: the designs within every other limit fail the vibration screen (fluid-elastic instability by Connors or vortex lock-in at a window span)'],
   wall: ['process.design', 'the design pressure (or allow other tube materials, gauges or rolled shells): the walls on offer are too thin for it (ASME VIII-1 UG-27 with corrosion allowance and minimum gauge)'],
   'shell-aspect': ['constraints.maxTubeLength_m', `the length: one shell's tube length over its diameter stays within ${SHELL_ASPECT[0]}–${SHELL_ASPECT[1]} (common practice); allow longer tubes or more shells in series`],
 };
@@ -51,7 +54,7 @@ export function sizeParsed(req: SizeRequest, opts: SizeOptions = {}): SizeResult
   const ctx = dutyContext(req);
   const st: SearchState = {
     req, ctx, step: c.lengthStep_m ?? opts.lengthStep_m ?? DEFAULT_LENGTH_STEP_M, costOf: opts.costOf ?? costProxy,
-    reasons: { length: 0, 'pressure-drop': 0, 'shell-pressure-drop': 0, 'lmtd-correction': 0, 'shell-size': 0, 'shell-aspect': 0, wall: 0 }, evaluated: 0, pre: [],
+    reasons: { length: 0, 'pressure-drop': 0, 'shell-pressure-drop': 0, 'lmtd-correction': 0, 'shell-size': 0, 'shell-aspect': 0, wall: 0, vibration: 0 }, evaluated: 0, pre: [],
   };
   if (searchShells(req).length === 0) {
     throw new ThermalInputError('no-feasible-design', 'No standard shell is as small as the maximum shell diameter.', 'constraints.maxShellInnerDiameter_m');
@@ -73,13 +76,19 @@ export function sizeParsed(req: SizeRequest, opts: SizeOptions = {}): SizeResult
   const pick = (p: Pre) => ({ rank: p.rank, cost: p.cost, side: p.input.processSide, shells: p.input.shellsInSeries, tubeDp: p.tubeDp, shellDp: p.shellDp, length: p.input.tubeLength_m, key: distinctKey(p.input), p });
   const toRate = spanning(distinct(st.pre.map(pick)), Math.max(maxKeep * 2, 24), 3);
   const rated: { d: Design; rank: number; key: string }[] = [];
-  for (const { p } of toRate) {
+  const rateInto = (p: Pre) => {
     const d = rateCandidate(st, refineCut(st, p));
-    if (!d) continue;
+    if (!d) return;
     const findings = d.rating.warnings.filter((w) => /velocity-(low|high)$/.test(w.code)).length;
     const tubeLiquid = ((d.processSide ?? 'tubes') === 'tubes' ? ctx.s : ctx.coolant?.c ?? ctx.s).fluid.phase === 'liquid';
     const laminarTube = alloc.sides.length > 1 && tubeLiquid && d.rating.regime === 'laminar';
     rated.push({ d, rank: rankOf(d.cost, findings, laminarTube), key: distinctKey(d) });
+  };
+  for (const { p } of toRate) rateInto(p);
+  // every spanning candidate failed the vibration screen: the next ones by rank (closer spacings among them)
+  if (rated.length === 0 && st.reasons.vibration > 0) {
+    const tried = new Set(toRate.map((r) => r.p));
+    for (const p of st.pre.filter((x) => !tried.has(x)).sort((a, b) => a.rank - b.rank).slice(0, VIBRATION_RETRIES)) if ((rateInto(p), rated.length >= maxKeep)) break;
   }
   if (rated.length === 0) throw noFeasible(st.reasons, st.evaluated);
   const sorted = distinct(rated).map((r) => ({ ...r, side: r.d.processSide ?? 'tubes', shells: r.d.shellsInSeries ?? 1, cost: r.d.cost, tubeDp: r.d.rating.pressureDrop.total_Pa, shellDp: r.d.rating.shellPressureDrop_Pa ?? 0, length: r.d.tubeLength_m }));
@@ -142,7 +151,7 @@ function rateCandidate(st: SearchState, p: Pre): Design | null {
     let rating;
     try {
       rating = p.shell
-        ? rateCoolant(ctx.s, ctx.coolant!.c, bundle, p.shell, p.view!.fouling, req.correlation, { profilePoints: 21 }, { processSide: p.input.processSide, shells: n, method: req.shellMethod, holds: p.holds })
+        ? rateCoolant(ctx.s, ctx.coolant!.c, bundle, p.shell, p.view!.fouling, req.correlation, { profilePoints: 21 }, { processSide: p.input.processSide, shells: n, method: req.shellMethod, holds: p.holds, tubeMaterial: p.input.tubeMaterial })
         : rateWall(ctx.s, ctx.wall!.temp, bundle, req.correlation, { profilePoints: 21 });
     } catch {
       return null;
@@ -152,6 +161,7 @@ function rateCandidate(st: SearchState, p: Pre): Design | null {
     if (p.shell && (rating.shellPressureDrop_Pa ?? 0) > maxShellDp) return null;
     if (bundle.length > c.maxTubeLength_m + 1e-9) return null;
     if (p.shell && bundle.length / p.shell.dShell > SHELL_ASPECT[1]) return null;
+    if (rating.vibration && !rating.vibration.ok) { st.reasons.vibration++; return null; }
     const area = p.shell ? rating.area_m2 : bundle.count * Math.PI * bundle.dInner * bundle.length;
     const plan = p.shell ? bafflePlan(bundle.length, p.shell.baffleSpacing, p.shell.dShell) : undefined;
     const input = { ...p.input, tubeLength_m: bundle.length, baffleCount: plan?.count };

@@ -60,6 +60,18 @@ describe('vibration screen in sizing', () => {
     expect(res.status).toBe(200);
     for (const d of res.body.candidates) expectScreened(d);
   });
+
+  it('a duty whose designs within the other limits fail the screen counts them in the no-design explanation', async () => {
+    // 9.525 mm titanium tubes on a 45° layout (Connors' K 2.4) under 80 kg/s of shell-side water: the fast shell side makes the spans unstable
+    const res = await post('/api/thermal/size', {
+      process: { fluid: 'water', pressure_Pa: 400000, massFlow_kg_s: 20, inletTemp_C: 60, outletTemp_C: 45 },
+      boundary: { kind: 'coolant', fluid: 'water', pressure_Pa: 300000, massFlow_kg_s: 80, inletTemp_C: 28 },
+      constraints: { maxTubeLength_m: 6, maxPressureDrop_Pa: 300000, tubeOuterDiameters_m: [0.009525], materials: ['titanium-gr2'], layouts: [45] },
+    });
+    expect(res.status).toBe(422);
+    expect(res.body.error.code).toBe('no-feasible-design');
+    expect(res.body.error.message).toMatch(/\d+ × vibration/);
+  });
 });
 
 describe('vibration screen in rating', () => {
