@@ -88,7 +88,10 @@ export function sizeParsed(req: SizeRequest, opts: SizeOptions = {}): SizeResult
   // every spanning candidate failed the vibration screen: the next ones by rank (closer spacings among them)
   if (rated.length === 0 && st.reasons.vibration > 0) {
     const tried = new Set(toRate.map((r) => r.p));
-    for (const p of st.pre.filter((x) => !tried.has(x)).sort((a, b) => a.rank - b.rank).slice(0, VIBRATION_RETRIES)) if ((rateInto(p), rated.length >= maxKeep)) break;
+    for (const p of st.pre.filter((x) => !tried.has(x)).sort((a, b) => a.rank - b.rank).slice(0, VIBRATION_RETRIES)) {
+      rateInto(p);
+      if (rated.length >= maxKeep) break;
+    }
   }
   if (rated.length === 0) throw noFeasible(st.reasons, st.evaluated);
   const sorted = distinct(rated).map((r) => ({ ...r, side: r.d.processSide ?? 'tubes', shells: r.d.shellsInSeries ?? 1, cost: r.d.cost, tubeDp: r.d.rating.pressureDrop.total_Pa, shellDp: r.d.rating.shellPressureDrop_Pa ?? 0, length: r.d.tubeLength_m }));
