@@ -1,4 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import { sizeRequestSchema } from '../../schemas/thermal';
+import { evaluateDesign } from '../evaluate';
 import { connorsCriticalVelocity, owenBuffetingFrequency, pitchComponents, screenVibration, type VibrationInput } from './vibration';
 import { addedMassCoefficient, SPAN_END_CONSTANT, spanNaturalFrequency, tubeMassPerLength, tubeSecondMoment } from './tube-frequency';
 
@@ -90,5 +92,24 @@ describe('vibration screen', () => {
     expect(central.vortexOk).toBe(false);
     expect(r.findings.some((w) => w.code === 'vibration-vortex')).toBe(true);
     expect(screenVibration({ ...slow, centralVelocity_m_s: v, shellLiquid: false, shellDensity: 5 }).spans.every((s) => s.vortexOk)).toBe(true);
+  });
+});
+
+describe('a hand-set design that fails the screen', () => {
+  it('keeps its geometry and carries the failing check with its reason in words', () => {
+    // invented duty: water cooled by a large flow of water on the shell side
+    const duty = sizeRequestSchema.parse({
+      process: { fluid: 'water', pressure_Pa: 300000, massFlow_kg_s: 2, inletTemp_C: 75, outletTemp_C: 40 },
+      boundary: { kind: 'coolant', fluid: 'water', pressure_Pa: 300000, massFlow_kg_s: 30, inletTemp_C: 25 },
+      constraints: { maxTubeLength_m: 6, maxPressureDrop_Pa: 70000 },
+    });
+    const g = { tubeCount: 100, tubeLength_m: 4, tubeOuterDiameter_m: 0.01905, tubeWall_m: 0.00165, tubeMaterial: 'carbon-steel', tubePasses: 1, layout: 30 as const, shellInnerDiameter_m: 0.3048, baffleSpacing_m: 0.6, processSide: 'tubes' as const };
+    const d = evaluateDesign(duty, g);
+    expect(d.baffleSpacing_m).toBe(0.6);
+    expect(d.rating.vibration?.ok).toBe(false);
+    const w = d.rating.warnings.find((x) => x.code === 'vibration-fluidelastic');
+    expect(w?.message).toMatch(/^Fails: fluid-elastic instability at the \w+ span/);
+    // closer baffles fix it
+    expect(evaluateDesign(duty, { ...g, baffleSpacing_m: 0.15 }).rating.vibration?.ok).toBe(true);
   });
 });
