@@ -4,6 +4,7 @@ import { correctionMethods } from '@shared/thermal/correlations/methods';
 import { formatQuantity, type QuantityKind, type UnitSystem } from '@shared/thermal/units';
 import { allocationSentence, readDesign, SHELL_METHOD_LABELS, shellsWords } from './design-words';
 import { layoutLabel, lengthLabel, materialName, tubeLabel } from './labels';
+import { vibrationFacts } from './vibration-words';
 
 export interface Fact {
   label: string;
@@ -137,5 +138,6 @@ export function designFacts(d: Design, system: UnitSystem, duty?: Pick<SizeReque
             ],
           },
         ]),
+    ...(r.vibration ? [{ title: 'Tube vibration screen', facts: vibrationFacts(r.vibration, system) }] : []),
   ];
 }
