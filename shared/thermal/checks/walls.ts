@@ -13,6 +13,7 @@
 import type { ProcessSide, SizeRequest } from '../../schemas/thermal';
 import type { ThermalWarning } from '../errors';
 import { resolveStream } from '../exchanger/streams';
+import { tubeMechanics } from './tube-frequency';
 import {
   allowableStress, corrosionAllowance, minimumWall, PIPE_JOINT_EFFICIENCY, PIPE_MILL_TOLERANCE, PLATE_THICKNESSES_M,
   ROLLED_JOINT_EFFICIENCY, SHELL_STRESS, TUBE_JOINT_EFFICIENCY, TUBE_STRESS,
@@ -191,7 +192,8 @@ export function catalogueShell(innerDiameter_m: number): Shell | undefined {
  * the corrosion allowance or the minimum gauge need, or the material has no allowable stress at the
  * design temperature), `shell-wall-thin` (a pipe shell's STD wall, or no plate in the list, covers
  * the shell side). Soft: `tube-external-pressure` when the shell side's design pressure exceeds the
- * tube side's (UG-28's charts decide; not computed here). A shell outside the catalogue is taken as
+ * tube side's and a quarter of the tubes' elastic collapse pressure (UG-28's charts decide; not
+ * computed here). A shell outside the catalogue is taken as
  * rolled plate.
  */
 export function checkWalls(g: WallGeometry, sides: { tube: WallSide; shell: WallSide }): WallCheck {
@@ -211,8 +213,9 @@ export function checkWalls(g: WallGeometry, sides: { tube: WallSide; shell: Wall
       const what = sh.kind === 'pipe' ? `the pipe's STD wall ${mm(sh.wall_m)} less 12.5 % mill tolerance` : `no plate up to ${mm(PLATE_THICKNESSES_M.at(-1)!)}`;
       findings.push({ code: 'shell-wall-thin', message: `The shell is too thin for the shell side's ${barg(shell.designPressure_Pa)}: it needs ${Number.isFinite(shell.required_m) ? mm(shell.required_m) : 'a thick-wall design'} (ASME VIII-1 UG-27 with corrosion allowance), more than ${what}. Choose a rolled shell or a lower design pressure.` });
     }
-    if (sides.shell.design.gauge_Pa > sides.tube.design.gauge_Pa) {
-      findings.push({ code: 'tube-external-pressure', message: `The shell side's design pressure ${barg(sides.shell.design.gauge_Pa)} exceeds the tube side's ${barg(sides.tube.design.gauge_Pa)}: the tubes carry external pressure, to be checked on the code's charts (ASME VIII-1 UG-28) by the responsible engineer.` });
+    const external = sides.shell.design.gauge_Pa;
+    if (external > sides.tube.design.gauge_Pa && external > EXTERNAL_FLAG_FRACTION * tubeCollapsePressure(g.tubeOuterDiameter_m, g.tubeWall_m, g.tubeMaterial)) {
+      findings.push({ code: 'tube-external-pressure', message: `The shell side's design pressure ${barg(external)} exceeds the tube side's ${barg(sides.tube.design.gauge_Pa)} and is more than a quarter of these tubes' elastic collapse pressure: check the tubes under external pressure on the code's charts (ASME VIII-1 UG-28) before relying on this wall.` });
     }
   }
   return {
@@ -224,6 +227,24 @@ export function checkWalls(g: WallGeometry, sides: { tube: WallSide; shell: Wall
     tube,
     shell,
   };
+}
+
+/**
+ * 0.25: the tubes under external pressure are flagged for UG-28's charts only when the shell side's
+ * design pressure exceeds a quarter of their elastic collapse pressure (a screen of ours, not the
+ * code's rule: well below it the charts are governed by yield and clear a few bar easily, and a flag
+ * on every design would hide the one that matters).
+ */
+export const EXTERNAL_FLAG_FRACTION = 0.25;
+
+/**
+ * Elastic collapse pressure of a long thin tube under external pressure, Pa (Bryan 1888; Timoshenko &
+ * Gere, *Theory of Elastic Stability*, 2nd ed., 1961, §7.3, memory): `p_cr = 2E/(1 − ν²) (t/D_o)³`,
+ * ν = 0.3. `E` by tube material (checks/tube-frequency.ts).
+ */
+export function tubeCollapsePressure(dOuter: number, wall: number, materialId: string): number {
+  const e = tubeMechanics(materialId).elasticModulus_Pa;
+  return ((2 * e) / (1 - 0.3 * 0.3)) * Math.pow(wall / dOuter, 3);
 }
 
 /** Codes of the wall check's hard findings. */
