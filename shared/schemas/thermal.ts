@@ -163,6 +163,12 @@ const tubePasses = z
   .max(8)
   .refine((n) => n === 1 || n % 2 === 0, { error: 'Tube passes must be 1 or an even number up to 8.' });
 
+/** TEMA construction (front head, shell, rear head) and class (issue 11, shared/thermal/checks/construction.ts). */
+export const constructionSchema = z.enum(['BEM', 'BEU', 'AES', 'AET']);
+export type Construction = z.infer<typeof constructionSchema>;
+export const temaClassSchema = z.enum(['R', 'C', 'B']);
+export type TemaClass = z.infer<typeof temaClassSchema>;
+
 /** Which side the process (hot) stream is on; the coolant takes the other. */
 export const processSideSchema = z.enum(['tubes', 'shell']);
 export type ProcessSide = z.infer<typeof processSideSchema>;
@@ -223,6 +229,8 @@ export const sizeConstraintsSchema = z.object({
   processSide: z.enum(['tubes', 'shell', 'either']).optional(),
   /** most identical shells in series the search may use (default 4) */
   maxShellsInSeries: shellsInSeries('Most shells in series').optional(),
+  /** TEMA class the duty asks for (default C, general commercial service) */
+  temaClass: temaClassSchema.optional(),
 });
 
 export const sizeRequestSchema = z.object({
@@ -267,6 +275,18 @@ export const vibrationSchema = z.object({
   massPerLength_kg_m: num.optional(),
 });
 export type Vibration = z.infer<typeof vibrationSchema>;
+
+/** One nozzle of one shell (issue 11): NPS label, bore, velocity and ρv² at it, impingement plate at a shell inlet. */
+export const nozzleSchema = z.object({
+  side: z.enum(['tube', 'shell']),
+  role: z.enum(['inlet', 'outlet']),
+  label: z.string(),
+  innerDiameter_m: num,
+  velocity_m_s: num,
+  rhoV2: num,
+  impingementPlate: z.boolean(),
+});
+export type DesignNozzle = z.infer<typeof nozzleSchema>;
 
 export const rateResultSchema = z.object({
   outletTemp_C: num,
@@ -325,6 +345,10 @@ export const rateResultSchema = z.object({
   /** fouling resistances used, m²K/W: the request's, else each fluid's default */
   foulingTube_m2K_W: num.optional(),
   foulingShell_m2K_W: num.optional(),
+  /** issue 11: the nozzles the rating sized and counted in both pressure drops (shared/thermal/checks/nozzles.ts), one shell's */
+  nozzles: z.array(nozzleSchema).optional(),
+  /** false when a nozzle would be wider than half the shell (hard finding nozzle-too-large) */
+  nozzlesOk: z.boolean().optional(),
   /** issue 11: flow-induced vibration screen of the bundle (shared/thermal/checks/vibration.ts), coolant boundary only */
   vibration: vibrationSchema.optional(),
 });
@@ -362,6 +386,12 @@ export const designSchema = z.object({
   shellWallRequired_m: num.optional(),
   /** the shell's wall: the pipe's STD wall or the rolled plate that covers the pressure, m */
   shellWall_m: num.optional(),
+  // issue 11, nozzles and construction; absent on designs stored before it (readers: flow rule, BEM, class C)
+  nozzles: z.array(nozzleSchema).optional(),
+  construction: constructionSchema.optional(),
+  temaClass: temaClassSchema.optional(),
+  /** why this construction, in words */
+  constructionReason: z.string().optional(),
   /** total over all shells */
   area_m2: num,
   requiredLength_m: num,

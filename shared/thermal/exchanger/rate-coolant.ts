@@ -8,6 +8,7 @@
  * beside the chosen method as a second opinion.
  */
 import type { ProcessSide, RateResult, ShellMethod } from '../../schemas/thermal';
+import { sizeNozzles } from '../checks/nozzles';
 import { screenVibration, type VibrationCheck } from '../checks/vibration';
 import type { CorrelationChoice } from '../correlations/select';
 import { ThermalInputError } from '../errors';
@@ -114,11 +115,18 @@ export function rateCoolant(
   const fill = arr.holds ? b.count / arr.holds : undefined;
   const shellLiquid = shellStream.fluid.phase === 'liquid';
   const vib = vibrationOf(b, shell, prepared, shellStream.massFlow_kg_s, st.shellBulk.density, st.tubeBulk.density, shellLiquid, arr.tubeMaterial);
+  // nozzles sized per side (checks/nozzles.ts); their losses count in both breakdowns (a given tube-side bore keeps its own)
+  const atEnds = (x: Stream, tIn: number, tOut: number) => ({ massFlow_kg_s: x.massFlow_kg_s, inletDensity: x.properties(tIn).density, outletDensity: x.properties(tOut).density, liquid: x.fluid.phase === 'liquid' });
+  const noz = sizeNozzles(atEnds(tube, tube.inletTemp_C, inTubes ? tHout : tCout), atEnds(shellStream, shellStream.inletTemp_C, inTubes ? tCout : tHout), shell.dShell);
+  const tubeNoz = b.nozzleDiameter ? dp1.nozzles_Pa : noz.tubeLoss_Pa;
+  const tubeDp = dp1.friction_Pa + dp1.returns_Pa + tubeNoz;
+  const shellDp = sd.dp.total_Pa + noz.shellLoss_Pa;
   const warnings = [
     ...conv.warnings,
-    ...tubeWarnings(tube, b, velocity, N * dp1.total_Pa),
+    ...tubeWarnings(tube, b, velocity, N * tubeDp),
     ...shellWarnings(shell, sd, method, shellLiquid, b.length, fill),
     ...vib.findings,
+    ...noz.findings,
   ];
   const n = opts.profilePoints ?? 21;
   const hotOut = tHout;
@@ -136,7 +144,7 @@ export function rateCoolant(
     velocity_m_s: velocity,
     entranceLength_m: entranceLength(conv.re, conv.pr, b.dInner),
     frictionFactor: dp1.frictionFactor,
-    pressureDrop: { friction_Pa: N * dp1.friction_Pa, returns_Pa: N * dp1.returns_Pa, nozzles_Pa: N * dp1.nozzles_Pa, total_Pa: N * dp1.total_Pa },
+    pressureDrop: { friction_Pa: N * dp1.friction_Pa, returns_Pa: N * dp1.returns_Pa, nozzles_Pa: N * tubeNoz, total_Pa: N * tubeDp },
     bulkMeanTemp_C: 0.5 * (tHin + tHout),
     area_m2: areaOut,
     warnings,
@@ -147,7 +155,7 @@ export function rateCoolant(
     effectiveness: st.eps,
     ntu: st.ntu,
     lmtdCorrectionF: f,
-    shellPressureDrop_Pa: N * sd.dp.total_Pa,
+    shellPressureDrop_Pa: N * shellDp,
     shellVelocity_m_s: sd.velocity,
     shellHtc_W_m2K: sd.h,
     shellInnerDiameter_m: shell.dShell,
@@ -159,7 +167,7 @@ export function rateCoolant(
     shellHtcKern_W_m2K: kern.h,
     shellPressureDropKern_Pa: N * kern.dp.total_Pa,
     shellReynolds: sd.re,
-    shellPressureDropBreakdown: { crossflow_Pa: N * sd.dp.crossflow_Pa, window_Pa: N * sd.dp.window_Pa, ends_Pa: N * sd.dp.ends_Pa, total_Pa: N * sd.dp.total_Pa },
+    shellPressureDropBreakdown: { crossflow_Pa: N * sd.dp.crossflow_Pa, window_Pa: N * sd.dp.window_Pa, ends_Pa: N * sd.dp.ends_Pa, nozzles_Pa: N * noz.shellLoss_Pa, total_Pa: N * shellDp },
     baffleSpacing_m: prepared.baffleSpacing,
     inletBaffleSpacing_m: prepared.inletSpacing,
     outletBaffleSpacing_m: prepared.outletSpacing,
@@ -167,6 +175,8 @@ export function rateCoolant(
     baffleCount: prepared.baffles,
     foulingTube_m2K_W: fouling.inside,
     foulingShell_m2K_W: fouling.outside,
+    nozzles: noz.nozzles,
+    nozzlesOk: noz.ok,
     vibration: { spans: vib.spans, ok: vib.ok, connorsK: vib.connorsK, logDecrement: vib.logDecrement, addedMassCoefficient: vib.addedMassCoefficient, massPerLength_kg_m: vib.massPerLength_kg_m },
   };
   if (methodId === 'bell-delaware') result.shellCorrections = sd.corrections;
