@@ -36,6 +36,12 @@ export const priceBookSchema = z.object({
   shopRatePerHour_minor: minor,
   overhead_pct: pct,
   margin_pct: pct,
+  /**
+   * issue 11: design margin on heat-transfer area, %: every quoted design is sized for the required
+   * tube length × (1 + margin), the shop's length round-up on top. Optional: a book saved before it
+   * reads DEFAULT_DESIGN_MARGIN_PCT.
+   */
+  designMargin_pct: z.number().min(0, { error: 'The design margin must be between 0 and 50 %.' }).max(50, { error: 'The design margin must be between 0 and 50 %.' }).optional(),
   /** discount on the whole price from this many units up */
   quantityBreaks: z.array(z.object({ minQuantity: z.int().min(2), discount_pct: pct })),
   /** surcharge when the need-by date is inside the standard lead time */
@@ -46,6 +52,17 @@ export const priceBookSchema = z.object({
   offerValidityDays: z.int().min(1).max(365),
 });
 export type PriceBook = z.infer<typeof priceBookSchema>;
+
+/**
+ * 10 %: design margin on area when the book states none. Common practice for a water-cooled
+ * shell-and-tube cooler sized with film correlations good to ±10–25 % (the margin covers the
+ * overall coefficient's uncertainty at its usual share of the resistance, not fouling, which is
+ * allowed for separately by the fouling resistances).
+ */
+export const DEFAULT_DESIGN_MARGIN_PCT = 10;
+
+/** The book's design margin, %, or the default for a book saved before the field. */
+export const designMarginOf = (book: Pick<PriceBook, 'designMargin_pct'>): number => book.designMargin_pct ?? DEFAULT_DESIGN_MARGIN_PCT;
 
 export const priceLineGroups = ['material', 'labour', 'overhead', 'margin', 'discount', 'surcharge'] as const;
 

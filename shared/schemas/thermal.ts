@@ -231,7 +231,43 @@ export const sizeConstraintsSchema = z.object({
   maxShellsInSeries: shellsInSeries('Most shells in series').optional(),
   /** TEMA class the duty asks for (default C, general commercial service) */
   temaClass: temaClassSchema.optional(),
+  /**
+   * issue 11: design margin on area, % (lengths are sized for the required length × (1 + margin),
+   * the length round-up on top). A quote is sized with at least the price book's `designMargin_pct`.
+   */
+  designMargin_pct: within('Design margin', 0, 100, '%').optional(),
 });
+
+/** 4: operating cases a duty may carry besides its design point (issue 11). */
+export const OPERATING_CASES_MAX = 4;
+
+/**
+ * One operating case (issue 11): a name and partial overrides of the design duty's process stream
+ * and boundary (e.g. summer coolant at 32 °C, winter at 15 °C, fouled/clean, turndown flow). The
+ * fluids stay the duty's; a field left out keeps the design point's value.
+ */
+export const operatingCaseSchema = z.object({
+  name: z.string({ error: 'Name the operating case.' }).trim().min(1, { error: 'Name the operating case.' }).max(60, { error: 'Use at most 60 characters for a case name.' }),
+  process: z
+    .object({
+      massFlow_kg_s: massFlow('Process mass flow').optional(),
+      inletTemp_C: temperature('Process inlet temperature').optional(),
+      outletTemp_C: temperature('Process outlet temperature').optional(),
+      pressure_Pa: pressure('Process pressure').optional(),
+    })
+    .optional(),
+  boundary: z
+    .object({
+      massFlow_kg_s: massFlow('Coolant mass flow').optional(),
+      inletTemp_C: temperature('Coolant inlet temperature').optional(),
+      pressure_Pa: pressure('Coolant pressure').optional(),
+      foulingInside_m2K_W: fouling('Tube-side fouling resistance').optional(),
+      foulingOutside_m2K_W: fouling('Shell-side fouling resistance').optional(),
+      wallTemp_C: temperature('Wall temperature').optional(),
+    })
+    .optional(),
+});
+export type OperatingCase = z.infer<typeof operatingCaseSchema>;
 
 export const sizeRequestSchema = z.object({
   process: processStreamSchema.extend({ outletTemp_C: temperature('Process outlet temperature') }),
@@ -239,6 +275,24 @@ export const sizeRequestSchema = z.object({
   constraints: sizeConstraintsSchema,
   correlation: correlationSchema,
   shellMethod: shellMethodSchema.optional(),
+  /** issue 11: up to four operating cases besides the design point; the search sizes for the governing one and rates all */
+  cases: z
+    .array(operatingCaseSchema)
+    .max(OPERATING_CASES_MAX, { error: `Give at most ${OPERATING_CASES_MAX} operating cases.` })
+    .optional(),
+}).superRefine((r, ctx) => {
+  const seen = new Set<string>();
+  (r.cases ?? []).forEach((c, i) => {
+    if (seen.has(c.name.toLowerCase())) ctx.addIssue({ code: 'custom', message: 'Give each operating case its own name.', path: ['cases', i, 'name'] });
+    seen.add(c.name.toLowerCase());
+    const b = c.boundary ?? {};
+    if (r.boundary.kind === 'wall' && (['massFlow_kg_s', 'inletTemp_C', 'pressure_Pa', 'foulingInside_m2K_W', 'foulingOutside_m2K_W'] as const).some((k) => b[k] !== undefined)) {
+      ctx.addIssue({ code: 'custom', message: 'A wall-cooled duty has no coolant stream: a case may change only the wall temperature.', path: ['cases', i, 'boundary'] });
+    }
+    if (r.boundary.kind === 'coolant' && b.wallTemp_C !== undefined) {
+      ctx.addIssue({ code: 'custom', message: 'A coolant-cooled duty has no wall temperature: change the coolant inlet temperature or flow instead.', path: ['cases', i, 'boundary', 'wallTemp_C'] });
+    }
+  });
 });
 export type SizeRequest = z.infer<typeof sizeRequestSchema>;
 export type SizeRequestInput = z.input<typeof sizeRequestSchema>;
@@ -351,8 +405,29 @@ export const rateResultSchema = z.object({
   nozzlesOk: z.boolean().optional(),
   /** issue 11: flow-induced vibration screen of the bundle (shared/thermal/checks/vibration.ts), coolant boundary only */
   vibration: vibrationSchema.optional(),
+  /**
+   * issue 11: half-width of the band on the process outlet, K, from the stated accuracy of the film
+   * correlations that ran, U re-evaluated at its low and high ends (shared/thermal/exchanger/uncertainty.ts)
+   */
+  outletUncertainty_K: num.optional(),
 });
 export type RateResult = z.infer<typeof rateResultSchema>;
+
+/** One operating case rated on a design (issue 11). */
+export const caseResultSchema = z.object({
+  name: z.string(),
+  outletTemp_C: num,
+  /** tube side, total over all shells */
+  pressureDrop_Pa: num,
+  shellPressureDrop_Pa: num.optional(),
+  outletUncertainty_K: num.optional(),
+  /** the case's target outlet */
+  targetOutletTemp_C: num.optional(),
+  coolantInletTemp_C: num.optional(),
+  /** the outlet reaches the target within the pressure-drop limits */
+  meets: z.boolean().optional(),
+});
+export type CaseResult = z.infer<typeof caseResultSchema>;
 
 export const designSchema = z.object({
   /** per shell (as tubeLength_m); area_m2 counts every shell */
@@ -392,6 +467,12 @@ export const designSchema = z.object({
   temaClass: temaClassSchema.optional(),
   /** why this construction, in words */
   constructionReason: z.string().optional(),
+  /** issue 11: design margin on area the length was sized with, % (absent: none, designs stored before it) */
+  designMargin_pct: num.optional(),
+  /** issue 11: the design rated under the design point and every operating case of the duty */
+  cases: z.array(caseResultSchema).optional(),
+  /** issue 11: the case that needed the largest area (the one the search sized for) */
+  governingCase: z.string().optional(),
   /** total over all shells */
   area_m2: num,
   requiredLength_m: num,
@@ -407,5 +488,8 @@ export const sizeResultSchema = z.object({
   evaluated: z.int(),
   feasible: z.int(),
   warnings: z.array(warningSchema),
+  /** issue 11: the recommended design under the design point and each operating case */
+  cases: z.array(caseResultSchema).optional(),
+  governingCase: z.string().optional(),
 });
 export type SizeResult = z.infer<typeof sizeResultSchema>;

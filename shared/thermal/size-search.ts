@@ -94,6 +94,8 @@ export interface SearchState {
   req: SizeRequest;
   ctx: DutyContext;
   step: number;
+  /** design margin on area as a factor, 1 + margin (the price book's `designMargin_pct`); lengths are sized for required × this */
+  margin?: number;
   costOf: (d: CostInput) => number;
   reasons: Record<Reason, number>;
   evaluated: number;
@@ -281,6 +283,8 @@ function solveCandidate(st: SearchState, ctx: DutyContext, view: SideView | unde
   const first = base.first;
   let required = base.length;
   if (view && b.kWall !== kRef) required *= 1 + base.u * ((b.dOuter * Math.log(b.dOuter / b.dInner)) / 2) * (1 / b.kWall - 1 / kRef);
+  const margin = st.margin ?? 1;
+  required *= margin; // sized for the required length × (1 + margin); divided out again below
   let n = first + 1;
   const longest = Math.min(c.maxTubeLength_m, SHELL_ASPECT[1] * dShell);
   if (view && roundUp(required, step) > longest + 1e-9) {
@@ -293,7 +297,7 @@ function solveCandidate(st: SearchState, ctx: DutyContext, view: SideView | unde
     }
   }
   const length = roundUp(required, step);
-  const out = { ok: false, required, length, shells: n, ntu: ntus[n - 1]!, tubeDp: 0, shellDp: 0 };
+  const out = { ok: false, required: required / margin, length, shells: n, ntu: ntus[n - 1]!, tubeDp: 0, shellDp: 0 };
   if (!(length <= c.maxTubeLength_m + 1e-9)) { st.reasons.length++; return out; }
   if (view && (length / dShell < SHELL_ASPECT[0] || length / dShell > SHELL_ASPECT[1])) { st.reasons['shell-aspect']++; return out; }
   const tube = view?.tube ?? ctx.s;

@@ -18,6 +18,7 @@ import { requiredLengthCoolant, type DutyContext } from './exchanger/required-le
 import { shellMethod } from './exchanger/shell-methods';
 import { SHELL_ASPECT } from './exchanger/shell-side';
 import { bafflePlan, SEARCH_BAFFLE_CUTS } from './geometry/baffles';
+import { sizeWithCases } from './size-cases';
 import { dutyContext } from './size-duty';
 import { distinct, distinctKey, spanning } from './size-pick';
 import { rankOf, search, searchShells, type Pre, type Reason, type SearchState } from './size-search';
@@ -29,6 +30,8 @@ export interface SizeOptions {
   lengthStep_m?: number;
   /** distinct designs returned in `candidates`; default 12 */
   maxCandidates?: number;
+  /** the fabricator's design margin on area, % (price book `designMargin_pct`); the request may ask for more, never less */
+  designMargin_pct?: number;
 }
 
 /** 0.1 m: default length step, a common cut-length increment for tube bundles (common practice). */
@@ -49,11 +52,23 @@ const RELAX: Record<Reason, [string, string]> = {
   'shell-aspect': ['constraints.maxTubeLength_m', `the length: one shell's tube length over its diameter stays within ${SHELL_ASPECT[0]}–${SHELL_ASPECT[1]} (common practice); allow longer tubes or more shells in series`],
 };
 
+/** Sizes a parsed request; with operating cases, for the governing one, rating all (size-cases.ts). */
 export function sizeParsed(req: SizeRequest, opts: SizeOptions = {}): SizeResult {
+  if (req.cases?.length) return sizeWithCases(req, (r) => sizeOne(r, opts));
+  return sizeOne(req, opts);
+}
+
+/** The design margin a sizing applies, %: the request's, at least the fabricator's (`opts`). */
+export function designMarginOf(req: SizeRequest, opts: SizeOptions = {}): number {
+  return Math.max(req.constraints.designMargin_pct ?? 0, opts.designMargin_pct ?? 0);
+}
+
+function sizeOne(req: SizeRequest, opts: SizeOptions): SizeResult {
   const c = req.constraints;
   const ctx = dutyContext(req);
+  const marginPct = designMarginOf(req, opts);
   const st: SearchState = {
-    req, ctx, step: c.lengthStep_m ?? opts.lengthStep_m ?? DEFAULT_LENGTH_STEP_M, costOf: opts.costOf ?? costProxy,
+    req, ctx, step: c.lengthStep_m ?? opts.lengthStep_m ?? DEFAULT_LENGTH_STEP_M, costOf: opts.costOf ?? costProxy, margin: 1 + marginPct / 100,
     reasons: { length: 0, 'pressure-drop': 0, 'shell-pressure-drop': 0, 'lmtd-correction': 0, 'shell-size': 0, 'shell-aspect': 0, wall: 0, vibration: 0 }, evaluated: 0, pre: [],
   };
   if (searchShells(req).length === 0) {
@@ -97,6 +112,7 @@ export function sizeParsed(req: SizeRequest, opts: SizeOptions = {}): SizeResult
   const sorted = distinct(rated).map((r) => ({ ...r, side: r.d.processSide ?? 'tubes', shells: r.d.shellsInSeries ?? 1, cost: r.d.cost, tubeDp: r.d.rating.pressureDrop.total_Pa, shellDp: r.d.rating.shellPressureDrop_Pa ?? 0, length: r.d.tubeLength_m }));
   const chosen = spanning(sorted, maxKeep).map((r) => r.d);
   explain(ctx, chosen, alloc.rule, sorted.map((r) => r.d));
+  if (marginPct > 0) for (const d of chosen) d.designMargin_pct = marginPct;
   const recommended = chosen[0]!;
   if (recommended.rating.warnings.length) warnings.push(...recommended.rating.warnings);
   return { recommended, candidates: chosen, evaluated: st.evaluated, feasible: st.pre.length, warnings };
@@ -131,7 +147,7 @@ function refineCut(st: SearchState, p: Pre): Pre {
       r = next;
       if (settled) break;
     }
-    const length = Math.round(Math.ceil(r.length / st.step - 1e-9) * st.step * 1e9) / 1e9;
+    const length = Math.round(Math.ceil((r.length * (st.margin ?? 1)) / st.step - 1e-9) * st.step * 1e9) / 1e9;
     const dp = n * side.dp.total_Pa * (length / r.length);
     if (!(length <= c.maxTubeLength_m + 1e-9) || dp > maxShellDp) continue;
     if (r.length < bestLen - 1e-6 || (Math.abs(r.length - bestLen) <= 1e-6 && dp < bestDp)) {

@@ -8,6 +8,7 @@
  * beside the chosen method as a second opinion.
  */
 import type { ProcessSide, RateResult, ShellMethod } from '../../schemas/thermal';
+import { outletBandCoolant, overallRelativeUncertainty } from './uncertainty';
 import { sizeNozzles } from '../checks/nozzles';
 import { screenVibration, type VibrationCheck } from '../checks/vibration';
 import type { CorrelationChoice } from '../correlations/select';
@@ -180,6 +181,7 @@ export function rateCoolant(
     vibration: { spans: vib.spans, ok: vib.ok, connorsK: vib.connorsK, logDecrement: vib.logDecrement, addedMassCoefficient: vib.addedMassCoefficient, massPerLength_kg_m: vib.massPerLength_kg_m },
   };
   if (methodId === 'bell-delaware') result.shellCorrections = sd.corrections;
+  result.outletUncertainty_K = outletBandCoolant(tHin, tHout, st.ntu, st.cr, b.passes, N, overallRelativeUncertainty(result, b.dOuter, b.dInner));
   if (fill !== undefined) result.shellFill = fill;
   if (s.humidityRatio !== undefined) {
     result.condensate_kg_s = st.condensate;

@@ -6,6 +6,7 @@ import { ENGINEERING_CAUTION, tubeWarnings } from './checks';
 import { solveFixedPoint } from './solve';
 import { condensation, propertiesOrNull, type Stream } from './streams';
 import { entranceLength, tubePressureDrop, tubeSideConvection, tubeSideH, tubeVelocity, type Bundle } from './tube-side';
+import { outletBandWall, tubeAccuracy } from './uncertainty';
 import { ntuWall, outletTempWall } from './wall';
 
 export interface RateOptions {
@@ -77,6 +78,7 @@ export function rateWall(s: Stream, wallTemp_C: number, b: Bundle, choice: Corre
     caution: ENGINEERING_CAUTION,
     profile,
   };
+  result.outletUncertainty_K = outletBandWall(tIn, wallTemp_C, ntu, tubeAccuracy(conv.method));
   if (s.humidityRatio !== undefined) {
     result.condensate_kg_s = eff.condensate_kg_s;
     result.latentDuty_W = eff.latent_W;
