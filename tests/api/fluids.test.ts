@@ -72,3 +72,77 @@ describe('GET /api/fluids/:id/properties', () => {
     expect(unknown.status).toBe(404);
   });
 });
+
+describe('glycol–water at any library strength (10–60 % by mass in steps of 5, Melinder 2010)', () => {
+  const props = async (id: string, temp_C: number) =>
+    (await request(t.app).get(`/api/fluids/${id}/properties`).query({ temp_C }).expect(200)).body;
+
+  it('lists ethylene- and propylene-glycol 10…60 % with their freezing points as the lower limit', async () => {
+    const res = await request(t.app).get('/api/fluids').expect(200);
+    const byId = new Map<string, { name: string; minTemp_C: number; maxTemp_C: number }>(
+      res.body.items.map((f: { id: string }) => [f.id, f]),
+    );
+    for (const kind of ['ethylene', 'propylene']) {
+      for (let p = 10; p <= 60; p += 5) expect(byId.has(`${kind}-glycol-${p}`), `${kind} ${p}`).toBe(true);
+    }
+    const eg40 = byId.get('ethylene-glycol-40')!;
+    expect(eg40.name).toBe('Ethylene glycol–water, 40 % by mass');
+    // ASHRAE Handbook—Fundamentals (2009) ch. 31: 40 % ethylene glycol freezes near −23.5 °C (memory)
+    expect(Math.abs(eg40.minTemp_C + 23.5)).toBeLessThan(1.5);
+    expect(eg40.maxTemp_C).toBe(100);
+  });
+
+  it('40 % ethylene glycol at 20 °C lies between 30 % and 50 % and near the published values', async () => {
+    const [a, m, b] = [await props('ethylene-glycol-30', 20), await props('ethylene-glycol-40', 20), await props('ethylene-glycol-50', 20)];
+    for (const key of ['density', 'specificHeat', 'viscosity', 'conductivity', 'prandtl']) {
+      expect(m[key], key).toBeGreaterThan(Math.min(a[key], b[key]));
+      expect(m[key], key).toBeLessThan(Math.max(a[key], b[key]));
+    }
+    // ASHRAE Handbook—Fundamentals (2009) ch. 31 ethylene glycol tables, 40 % by mass, 20 °C (memory)
+    expect(Math.abs(m.density / 1053 - 1)).toBeLessThan(0.01);
+    expect(Math.abs(m.specificHeat / 3500 - 1)).toBeLessThan(0.03);
+    expect(Math.abs(m.viscosity / 2.9e-3 - 1)).toBeLessThan(0.15);
+  });
+
+  it('refuses a strength outside 10–60 % or off the steps with 422 naming `id`', async () => {
+    const high = await request(t.app).get('/api/fluids/ethylene-glycol-70/properties').query({ temp_C: 20 });
+    expect(high.status).toBe(422);
+    expect(high.body.error.code).toBe('fluid-range');
+    expect(high.body.error.fields.id).toMatch(/10 to 60 % glycol by mass/);
+    const off = await request(t.app).get('/api/fluids/propylene-glycol-42/properties').query({ temp_C: 20 });
+    expect(off.status).toBe(422);
+    expect(off.body.error.fields.id).toMatch(/propylene-glycol-40 or propylene-glycol-45/);
+  });
+
+  it('refuses 40 % ethylene glycol below its freezing point (−23.8 °C, Melinder 2010)', async () => {
+    expect((await request(t.app).get('/api/fluids/ethylene-glycol-40/properties').query({ temp_C: -20 })).status).toBe(200);
+    const frozen = await request(t.app).get('/api/fluids/ethylene-glycol-40/properties').query({ temp_C: -30 });
+    expect(frozen.status).toBe(422);
+    expect(frozen.body.error.message).toMatch(/begins to freeze at -23\.8 °C/);
+  });
+});
+
+describe('glycol strength in a sizing request', () => {
+  const sizeBody = (coolant: string, inletTemp_C: number) => ({
+    process: { fluid: 'oil-vg46', pressure_Pa: 500000, massFlow_kg_s: 1.2, inletTemp_C: 62, outletTemp_C: 47 },
+    boundary: { kind: 'coolant', fluid: coolant, pressure_Pa: 350000, massFlow_kg_s: 2.4, inletTemp_C },
+    constraints: { maxTubeLength_m: 3.5, maxPressureDrop_Pa: 70000, maxShellPressureDrop_Pa: 70000 },
+  });
+
+  it('sizes with a 40 % ethylene glycol coolant', async () => {
+    const res = await request(t.app).post('/api/thermal/size').send(sizeBody('ethylene-glycol-40', 27));
+    expect(res.status).toBe(200);
+  });
+
+  it('refuses a 70 % glycol coolant with 400 naming boundary.fluid and the range', async () => {
+    const res = await request(t.app).post('/api/thermal/size').send(sizeBody('ethylene-glycol-70', 27));
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields['boundary.fluid']).toMatch(/10 to 60 % glycol by mass/);
+  });
+
+  it('refuses a coolant entering below its freezing point with 422', async () => {
+    const res = await request(t.app).post('/api/thermal/size').send(sizeBody('ethylene-glycol-20', -12));
+    expect(res.status).toBe(422);
+    expect(res.body.error.message).toMatch(/freeze/);
+  });
+});

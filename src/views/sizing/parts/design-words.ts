@@ -5,6 +5,7 @@
  * method. No code of the engine reaches the screen as it is.
  */
 import type { Design, FluidRef, RateResult, SizeRequest } from '@shared/schemas/thermal';
+import { parseGlycolId } from '@shared/thermal/fluids/glycols';
 
 export type ProcessSide = 'tubes' | 'shell';
 export type ShellMethod = 'bell-delaware' | 'kern';
@@ -120,7 +121,9 @@ const FLUID_WORDS: Record<string, string> = {
 };
 
 export function fluidWords(fluid: FluidRef | undefined, fallback: string): string {
-  return typeof fluid === 'string' ? (FLUID_WORDS[fluid] ?? fallback) : fallback;
+  if (typeof fluid !== 'string') return fallback;
+  const glycol = parseGlycolId(fluid); // any library strength, e.g. '40 % ethylene glycol'
+  return FLUID_WORDS[fluid] ?? (glycol ? `${glycol.massPercent} % ${glycol.kind} glycol` : fallback);
 }
 
 const capital = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
