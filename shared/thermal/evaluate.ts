@@ -8,6 +8,8 @@ import type { Design, ProcessSide, RateRequest, RateResult, SizeRequest } from '
 import { allocationReason, foulingFor } from './allocation';
 import { costProxy, type CostInput } from './cost-proxy';
 import { checkWalls, designWallFields, wallSides } from './checks/walls';
+import { constructionFor } from './checks/construction';
+import { designNozzles } from './checks/nozzles';
 import { ThermalInputError } from './errors';
 import { defaultBaffleSpacing } from './exchanger/shell-side';
 import { resolveStream } from './exchanger/streams';
@@ -16,6 +18,7 @@ import { STANDARD_SHELLS } from './geometry/shells';
 import { MIN_PITCH_RATIO, tubeSizeOf } from './geometry/tubes';
 import type { Layout } from './geometry/layout';
 import { rateParsed } from './rate';
+import { rateAllCases } from './size-cases';
 
 export interface GeometryChoice {
   tubeCount: number;
@@ -154,9 +157,12 @@ export function evaluateDesign(duty: SizeRequest, g: GeometryChoice, costOf: (d:
     duty.boundary.kind === 'coolant'
       ? allocationReason(resolveStream(duty.process, 'process'), resolveStream(duty.boundary, 'boundary'), { side: base.processSide, tubeH: rating.htc_W_m2K, shellH: rating.shellHtc_W_m2K ?? 0, tubeRe: rating.reynolds })
       : 'The process is in the tubes: a wall boundary (a bath or a condensing/boiling shell side) cools the tubes.';
-  return {
+  const design: Design = {
     ...base,
     ...designWallFields(walls),
+    // nozzles and construction (issue 11): a nozzle wider than half the shell stays as a hard finding in the warnings
+    ...(rating.nozzles ? { nozzles: designNozzles(rating.nozzles) } : {}),
+    ...constructionFor(duty, { processSide: base.processSide, tubePasses: g.tubePasses, rating }),
     area_m2: rating.area_m2,
     // an unreachable target is reported as a margin of −100 % with the warning above
     requiredLength_m: reachable ? required : g.tubeLength_m * 100,
@@ -165,4 +171,7 @@ export function evaluateDesign(duty: SizeRequest, g: GeometryChoice, costOf: (d:
     allocationReason: allocation,
     rating,
   };
+  // operating cases (issue 11): the hand-set design rated under the design point and each case
+  if (duty.cases?.length) design.cases = rateAllCases(duty, design);
+  return design;
 }

@@ -11,6 +11,7 @@ import { drawHeading, drawNoticeBox, drawParagraphs } from '../../lib/pdf/blocks
 import { designPairs, designReasons, materialName, methodSentence, performancePairs, shellMethodSentence, tubeOdLabel } from '../../lib/pdf/design-rows';
 import { COLOR, CONTENT_WIDTH, PAGE, createPdf, ensureSpace, pdfToBuffer } from '../../lib/pdf/document';
 import { dutyRows, fluidName, limitPairs } from '../../lib/pdf/duty-rows';
+import { casesTable, foulingSentence, guaranteeSentence } from '../../lib/pdf/margin-rows';
 import { FONT } from '../../lib/pdf/fonts';
 import { latinStrings } from '../../lib/pdf/glyphs';
 import { drawPageFrames } from '../../lib/pdf/page-frame';
@@ -111,9 +112,18 @@ function drawEngineering(doc: PDFKit.PDFDocument, o: OfferPdfInput): void {
     drawParagraphs(doc, reasons, 9);
   }
   const methods = [methodSentence(design), shellMethodSentence(design, o.units)].filter((x): x is string => x !== undefined);
-  section(doc, '3  Predicted performance', factsTable(performancePairs(design, o.units)), 12 * methods.length + 12);
+  // issue 11: the guarantee with the margin that backs it, and the fouling policy
+  const policy = [guaranteeSentence(design, duty, o.units), foulingSentence(design, duty)].filter((x): x is string => x !== undefined);
+  section(doc, '3  Predicted performance', factsTable(performancePairs(design, o.units)), 12 * (methods.length + policy.length) + 12);
   doc.moveDown(0.4);
-  drawParagraphs(doc, methods, 9);
+  drawParagraphs(doc, [...policy, ...methods], 9);
+  const cases = casesTable(design, o.units);
+  if (cases) {
+    ensureSpace(doc, tableKeepHeight(doc, cases) + 20);
+    doc.moveDown(0.4);
+    drawParagraphs(doc, ['Operating cases: the design rated at each.'], 9);
+    drawTable(doc, cases);
+  }
   const r = design.rating;
   drawNoticeBox(doc, {
     title: 'Cautions',
