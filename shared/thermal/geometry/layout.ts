@@ -1,11 +1,14 @@
 /**
  * Tube hole centres in a tubesheet: a lattice laid inside the outer tube limit (OTL), less the
- * pass-partition lanes and the tie rods. The shop's drilling pattern and the tube count both come
- * from here. Deterministic; results are cached per (shell, OD, pitch, layout, passes) in a bounded
- * LRU cache.
+ * pass-partition lanes (and, when asked, the room under the shell inlet nozzle for an impingement
+ * plate), with TEMA's tie rods placed where they cost the fewest tubes (./tie-rods.ts). The shop's
+ * drilling pattern and the tube count both come from here. Deterministic; results are cached per
+ * (shell, OD, pitch, layout, passes, room under the inlet) in a bounded LRU cache.
  */
 import { LRUCache } from 'lru-cache';
-import { bundleClearance, tieRodCount } from './shells';
+import { shellToBaffleClearanceTema } from '../exchanger/tema-clearances';
+import { bundleClearance } from './shells';
+import { TIE_ROD_LIGAMENT_M, placeTieRods, temaTieRods, type TieRods } from './tie-rods';
 
 /** Tube layout angles (TEMA): 30° triangular, 60° rotated triangular, 90° square, 45° rotated square. */
 export const LAYOUTS = [30, 60, 90, 45] as const;
@@ -24,18 +27,28 @@ export interface TubeLayoutKey {
   tubePitch_m: number;
   layout: Layout;
   tubePasses: number;
+  /**
+   * Room for an impingement plate under the shell inlet nozzle, m: tube holes whose tube comes
+   * closer than this to the shell wall at the nozzle (the top, +y, where the shell inlet is drawn)
+   * are left out across the whole chord. Default none.
+   */
+  clearUnderInlet_m?: number;
 }
 
 export interface TubeLayout {
-  /** hole centres, m, origin at the shell axis; x horizontal, y vertical */
+  /** hole centres, m, origin at the shell axis; x horizontal, y vertical; tube holes first, then the tie rods */
   x: Float64Array;
   y: Float64Array;
   /** 1 where the hole takes a tie rod instead of a tube */
   tieRod: Uint8Array;
-  /** the pass-partition region of each hole (0 … passes−1) */
+  /** the pass-partition region of each hole (0 … passes−1; 0 for a tie rod) */
   region: Uint8Array;
   tubeCount: number;
   outerTubeLimit_m: number;
+  /** TEMA's tie rods for this shell (RCB-4.71, memory): count placed and rod diameter */
+  tieRods: TieRods;
+  /** tube holes the tie rods took because no free position was left in their sector (0 normally) */
+  tubesDisplacedByTieRods: number;
 }
 
 /** Lattice basis vectors for a layout at pitch p. */
@@ -57,7 +70,7 @@ function lanes(passes: number): { bands: number; halves: number } {
   return { bands: passes / 2, halves: 2 };
 }
 
-function layOut(k: TubeLayoutKey, ox: number, oy: number): { x: number[]; y: number[]; region: number[] } {
+function layOut(k: TubeLayoutKey, ox: number, oy: number): { x: number[]; y: number[]; region: number[]; laneY: number[]; laneX: number[] } {
   const d = k.tubeOuterDiameter_m;
   const otl = k.shellInnerDiameter_m - bundleClearance(k.shellInnerDiameter_m);
   const rMax = otl / 2 - d / 2;
@@ -66,6 +79,8 @@ function layOut(k: TubeLayoutKey, ox: number, oy: number): { x: number[]; y: num
   const laneHalf = (PASS_LANE_CLEARANCE_M + d) / 2;
   const laneY: number[] = [];
   for (let b = 1; b < bands; b++) laneY.push(-otl / 2 + (otl * b) / bands);
+  // the tube's top may come no nearer the shell wall at the inlet nozzle than clearUnderInlet_m
+  const yTop = k.clearUnderInlet_m ? k.shellInnerDiameter_m / 2 - k.clearUnderInlet_m - d / 2 : Infinity;
   const n = Math.ceil(otl / k.tubePitch_m) + 2;
   const x: number[] = [];
   const y: number[] = [];
@@ -75,6 +90,7 @@ function layOut(k: TubeLayoutKey, ox: number, oy: number): { x: number[]; y: num
       const px = ox + i * ax + j * bx;
       const py = oy + i * ay + j * by;
       if (px * px + py * py > rMax * rMax) continue;
+      if (py > yTop) continue;
       if (halves === 2 && Math.abs(px) < laneHalf) continue;
       let band = 0;
       let inLane = false;
@@ -88,29 +104,7 @@ function layOut(k: TubeLayoutKey, ox: number, oy: number): { x: number[]; y: num
       region.push(band * halves + (halves === 2 && px > 0 ? 1 : 0));
     }
   }
-  return { x, y, region };
-}
-
-/** Marks the outermost holes nearest to evenly spaced angles as tie rods. */
-function pickTieRods(x: number[], y: number[], count: number): Uint8Array {
-  const tie = new Uint8Array(x.length);
-  let rOuter = 0;
-  for (let i = 0; i < x.length; i++) rOuter = Math.max(rOuter, Math.hypot(x[i]!, y[i]!));
-  for (let t = 0; t < count && t < x.length; t++) {
-    const want = (2 * Math.PI * (t + 0.5)) / count;
-    let best = -1;
-    let bestScore = Infinity;
-    for (let i = 0; i < x.length; i++) {
-      if (tie[i]) continue;
-      const r = Math.hypot(x[i]!, y[i]!);
-      let da = Math.abs(Math.atan2(y[i]!, x[i]!) - want + 2 * Math.PI) % (2 * Math.PI);
-      da = Math.min(da, 2 * Math.PI - da);
-      const score = da * rOuter + 4 * (rOuter - r);
-      if (score < bestScore) { bestScore = score; best = i; }
-    }
-    if (best >= 0) tie[best] = 1;
-  }
-  return tie;
+  return { x, y, region, laneY, laneX: halves === 2 ? [0] : [] };
 }
 
 /**
@@ -127,7 +121,7 @@ const cache = new LRUCache<string, TubeLayout>({
   sizeCalculation: (l) => l.x.byteLength + l.y.byteLength + l.tieRod.byteLength + l.region.byteLength + 64,
 });
 
-const cacheKey = (k: TubeLayoutKey) => `${k.shellInnerDiameter_m}|${k.tubeOuterDiameter_m}|${k.tubePitch_m}|${k.layout}|${k.tubePasses}`;
+const cacheKey = (k: TubeLayoutKey) => `${k.shellInnerDiameter_m}|${k.tubeOuterDiameter_m}|${k.tubePitch_m}|${k.layout}|${k.tubePasses}|${k.clearUnderInlet_m ?? 0}`;
 
 /** Layouts held in the cache now (for tests and diagnostics). */
 export function layoutCacheSize(): number {
@@ -149,16 +143,28 @@ export function tubeLayout(k: TubeLayoutKey): TubeLayout {
     if (trial.x.length > best.x.length) best = trial;
   }
   const otl = k.shellInnerDiameter_m - bundleClearance(k.shellInnerDiameter_m);
-  const tieRod = pickTieRods(best.x, best.y, tieRodCount(k.shellInnerDiameter_m));
-  let ties = 0;
-  for (const v of tieRod) ties += v;
+  // tie rods: free room at the rim (inside the baffle, a ligament from its edge) or in a lane
+  const rod = temaTieRods(k.shellInnerDiameter_m);
+  const baffleRadius = (k.shellInnerDiameter_m - shellToBaffleClearanceTema(k.shellInnerDiameter_m)) / 2;
+  const rods = placeTieRods({
+    x: best.x, y: best.y, tubeOuterDiameter_m: k.tubeOuterDiameter_m, tubePitch_m: k.tubePitch_m, rod,
+    rEdge_m: baffleRadius - rod.diameter_m / 2 - TIE_ROD_LIGAMENT_M, laneY: best.laneY, laneX: best.laneX,
+  });
+  const gone = new Set(rods.displaced);
+  const keep = best.x.map((_, i) => i).filter((i) => !gone.has(i));
+  const holes = keep.length + rods.x.length;
+  const x = new Float64Array(holes);
+  const y = new Float64Array(holes);
+  const region = new Uint8Array(holes);
+  const tieRod = new Uint8Array(holes);
+  keep.forEach((i, n) => { x[n] = best.x[i]!; y[n] = best.y[i]!; region[n] = best.region[i]!; });
+  rods.x.forEach((rx, t) => { x[keep.length + t] = rx; y[keep.length + t] = rods.y[t]!; tieRod[keep.length + t] = 1; });
   const result: TubeLayout = {
-    x: Float64Array.from(best.x),
-    y: Float64Array.from(best.y),
-    tieRod,
-    region: Uint8Array.from(best.region),
-    tubeCount: Math.max(0, best.x.length - ties),
+    x, y, tieRod, region,
+    tubeCount: keep.length,
     outerTubeLimit_m: otl,
+    tieRods: { count: rods.x.length, diameter_m: rod.diameter_m },
+    tubesDisplacedByTieRods: gone.size,
   };
   cache.set(key, result);
   return result;

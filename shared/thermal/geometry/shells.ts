@@ -1,4 +1,5 @@
 /** Shells: standard pipe up to NPS 24, then rolled plate. */
+import { temaTieRods } from './tie-rods';
 
 export interface Shell {
   label: string;
@@ -49,8 +50,7 @@ export function bundleClearance(shellInnerDiameter_m: number): number {
   return shellInnerDiameter_m <= 0.6 ? 0.0127 : 0.0159;
 }
 
-/** TEMA minimum tie-rod count by shell diameter (memory). */
+/** TEMA RCB-4.71 minimum tie-rod count by shell diameter (memory; the table is in ./tie-rods.ts). */
 export function tieRodCount(shellInnerDiameter_m: number): number {
-  const inch = shellInnerDiameter_m / 0.0254;
-  return inch < 15.5 ? 4 : inch < 33.5 ? 6 : inch < 48.5 ? 8 : inch < 60.5 ? 10 : 12;
+  return temaTieRods(shellInnerDiameter_m).count;
 }
