@@ -29,7 +29,7 @@ export const DEFAULT_MATERIALS = ['carbon-steel', 'stainless-304', 'copper', 'cu
 export const DEFAULT_LAYOUTS: Layout[] = [30, 60, 90, 45];
 export const DEFAULT_PASSES = [1, 2, 4];
 
-export type Reason = 'length' | 'pressure-drop' | 'shell-pressure-drop' | 'lmtd-correction' | 'shell-size' | 'shell-aspect' | 'wall' | 'vibration';
+export type Reason = 'length' | 'pressure-drop' | 'shell-pressure-drop' | 'lmtd-correction' | 'shell-size' | 'shell-aspect' | 'wall' | 'vibration' | 'nozzle';
 
 export type PreInput = CostInput & {
   tubePasses: number; layout: Layout; tubePitch_m: number; shellLabel: string; tubeWallLabel: string;

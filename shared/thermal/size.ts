@@ -12,6 +12,8 @@ import { allocationReason, processSides } from './allocation';
 import { costProxy, type CostInput } from './cost-proxy';
 import { ThermalInputError, type ThermalWarning } from './errors';
 import { checkWalls, designWallFields, wallSides } from './checks/walls';
+import { constructionFor } from './checks/construction';
+import { designNozzles } from './checks/nozzles';
 import { prepareFor, rateCoolant } from './exchanger/rate-coolant';
 import { rateWall } from './exchanger/rate-wall';
 import { requiredLengthCoolant, type DutyContext } from './exchanger/required-length';
@@ -49,6 +51,7 @@ const RELAX: Record<Reason, [string, string]> = {
   'shell-size': ['constraints.maxShellInnerDiameter_m', 'the maximum shell diameter'],
   vibration: ['constraints.maxShellPressureDrop_Pa', 'the shell-side pressure-drop limit (closer baffles shorten the tube spans) or lower the shell-side flow: the designs within every other limit fail the vibration screen (fluid-elastic instability by Connors or vortex lock-in at a window span)'],
   wall: ['process.design', 'the design pressure (or allow other tube materials, gauges or rolled shells): the walls on offer are too thin for it (ASME VIII-1 UG-27 with corrosion allowance and minimum gauge)'],
+  nozzle: ['constraints.maxShellInnerDiameter_m', 'the maximum shell diameter (or lower a flow): the nozzles these flows need are wider than half the shells within every other limit (common practice)'],
   'shell-aspect': ['constraints.maxTubeLength_m', `the length: one shell's tube length over its diameter stays within ${SHELL_ASPECT[0]}–${SHELL_ASPECT[1]} (common practice); allow longer tubes or more shells in series`],
 };
 
@@ -69,7 +72,7 @@ function sizeOne(req: SizeRequest, opts: SizeOptions): SizeResult {
   const marginPct = designMarginOf(req, opts);
   const st: SearchState = {
     req, ctx, step: c.lengthStep_m ?? opts.lengthStep_m ?? DEFAULT_LENGTH_STEP_M, costOf: opts.costOf ?? costProxy, margin: 1 + marginPct / 100,
-    reasons: { length: 0, 'pressure-drop': 0, 'shell-pressure-drop': 0, 'lmtd-correction': 0, 'shell-size': 0, 'shell-aspect': 0, wall: 0, vibration: 0 }, evaluated: 0, pre: [],
+    reasons: { length: 0, 'pressure-drop': 0, 'shell-pressure-drop': 0, 'lmtd-correction': 0, 'shell-size': 0, 'shell-aspect': 0, wall: 0, vibration: 0, nozzle: 0 }, evaluated: 0, pre: [],
   };
   if (searchShells(req).length === 0) {
     throw new ThermalInputError('no-feasible-design', 'No standard shell is as small as the maximum shell diameter.', 'constraints.maxShellInnerDiameter_m');
@@ -181,6 +184,7 @@ function rateCandidate(st: SearchState, p: Pre): Design | null {
     if (bundle.length > c.maxTubeLength_m + 1e-9) return null;
     if (p.shell && bundle.length / p.shell.dShell > SHELL_ASPECT[1]) return null;
     if (rating.vibration && !rating.vibration.ok) { st.reasons.vibration++; return null; }
+    if (rating.nozzlesOk === false) { st.reasons.nozzle++; return null; }
     const area = p.shell ? rating.area_m2 : bundle.count * Math.PI * bundle.dInner * bundle.length;
     const plan = p.shell ? bafflePlan(bundle.length, p.shell.baffleSpacing, p.shell.dShell) : undefined;
     const input = { ...p.input, tubeLength_m: bundle.length, baffleCount: plan?.count };
@@ -192,6 +196,8 @@ function rateCandidate(st: SearchState, p: Pre): Design | null {
     return {
       ...design,
       ...designWallFields(walls),
+      ...(rating.nozzles ? { nozzles: designNozzles(rating.nozzles) } : {}),
+      ...(p.shell ? constructionFor(req, { processSide: p.input.processSide, tubePasses: bundle.passes, rating }) : {}),
       ...(plan ? { inletBaffleSpacing_m: plan.inlet, outletBaffleSpacing_m: plan.outlet } : { baffleCut: undefined, baffleCount: undefined }),
       area_m2: area, requiredLength_m: p.requiredLength, overSurface_pct: (bundle.length / p.requiredLength - 1) * 100, cost: st.costOf(input), rating,
     };

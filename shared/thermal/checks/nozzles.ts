@@ -152,6 +152,6 @@ export function sizeNozzles(tube: NozzleStream, shell: NozzleStream, shellInnerD
 }
 
 /** The design's `nozzles` record (without the NPS number, which the label carries). */
-export function designNozzles(check: Pick<NozzleCheck, 'nozzles'>): { side: NozzleSide; role: NozzleRole; label: string; innerDiameter_m: number; velocity_m_s: number; rhoV2: number; impingementPlate: boolean }[] {
-  return check.nozzles.map(({ nps: _n, ...rest }) => rest);
+export function designNozzles(nozzles: readonly (Omit<Nozzle, 'nps'> & { nps?: number })[]): Omit<Nozzle, 'nps'>[] {
+  return nozzles.map(({ side, role, label, innerDiameter_m, velocity_m_s, rhoV2, impingementPlate }) => ({ side, role, label, innerDiameter_m, velocity_m_s, rhoV2, impingementPlate }));
 }

@@ -166,7 +166,7 @@ export function rateCoolant(
     shellsInSeries: N,
     shellMethod: methodId,
     shellHtcKern_W_m2K: kern.h,
-    shellPressureDropKern_Pa: N * kern.dp.total_Pa,
+    shellPressureDropKern_Pa: N * (kern.dp.total_Pa + noz.shellLoss_Pa),
     shellReynolds: sd.re,
     shellPressureDropBreakdown: { crossflow_Pa: N * sd.dp.crossflow_Pa, window_Pa: N * sd.dp.window_Pa, ends_Pa: N * sd.dp.ends_Pa, nozzles_Pa: N * noz.shellLoss_Pa, total_Pa: N * shellDp },
     baffleSpacing_m: prepared.baffleSpacing,
