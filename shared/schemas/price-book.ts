@@ -24,7 +24,13 @@ export const priceBookSchema = z.object({
   heads: z.array(z.object({ maxShellDiameter_m: z.number().positive(), perPair_minor: minor })).min(1),
   /** a nozzle with its flange, by largest NPS and flange rating class */
   nozzles: z.array(z.object({ maxNps: z.number().positive(), rating: z.enum(['150', '300']), each_minor: minor })).min(1),
-  sundries: z.object({ tieRodPerMetre_minor: minor, gasketSet_minor: minor, boltingSet_minor: minor, paintPerM2_minor: minor }),
+  sundries: z.object({
+    tieRodPerMetre_minor: minor, gasketSet_minor: minor, boltingSet_minor: minor, paintPerM2_minor: minor,
+    /** issue 11 (optional: a book saved before it prices these from the demo book, saying so): an impingement plate under a shell inlet, each */
+    impingementPlate_minor: minor.optional(),
+    /** issue 11: bending one U-tube of a U-tube (BEU) bundle, each */
+    uBendPerTube_minor: minor.optional(),
+  }),
   labourHours: z.object({
     perTubeEnd: z.number().min(0),
     perBaffle: z.number().min(0),

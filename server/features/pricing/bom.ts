@@ -40,7 +40,7 @@ export interface BomItem {
  * A sizing candidate (CostInput) or a full Design; labels and rating are used when present. The
  * issue-10 fields (shells in series, baffles) are optional: an old stored design is one shell.
  */
-export type BomInput = CostInput & TrainFields & Partial<Pick<Design, 'tubeWallLabel' | 'shellLabel' | 'tubePasses' | 'tubePitch_m' | 'rating'>>;
+export type BomInput = CostInput & TrainFields & Partial<Pick<Design, 'tubeWallLabel' | 'shellLabel' | 'tubePasses' | 'tubePitch_m' | 'rating' | 'nozzles' | 'construction'>>;
 
 export type BomRules = Pick<PriceBook, 'tubeCutAllowance_m' | 'labourHours'>;
 
@@ -75,8 +75,17 @@ export function shellSpec(d: Pick<BomInput, 'shellInnerDiameter_m' | 'shellWall_
   return { label: d.shellLabel ?? `rolled ${Math.round(ds * 1000)} mm ID`, kind: 'rolled', innerDiameter_m: ds, wall_m: d.shellWall_m ?? 0.01 };
 }
 
-/** Nozzle NPS of each side: from the rated flows when the design carries a rating, else by shell size. */
-export function nozzleSizes(d: BomInput, ds: number): { tube: number; shell: number; basis: 'flow' | 'shell size' } {
+/** NPS of a nozzle label ("NPS 1.5"), NaN if it is none. */
+const npsOf = (label: string) => Number(/^NPS\s+([\d.]+)/.exec(label)?.[1]);
+
+/**
+ * Nozzle NPS of each side: the sized nozzles a design carries (issue 11, checks/nozzles.ts; the
+ * larger of inlet and outlet), else from the rated flows when the design carries a rating (designs
+ * stored before it), else by shell size.
+ */
+export function nozzleSizes(d: BomInput, ds: number): { tube: number; shell: number; basis: 'sized nozzles' | 'flow' | 'shell size' } {
+  const sized = (side: 'tube' | 'shell') => Math.max(...(d.nozzles ?? []).filter((n) => n.side === side).map((n) => npsOf(n.label)).filter(Number.isFinite));
+  if (d.nozzles?.length && Number.isFinite(sized('tube')) && Number.isFinite(sized('shell'))) return { tube: sized('tube'), shell: sized('shell'), basis: 'sized nozzles' };
   const r = d.rating;
   const byShell = nozzleNpsByShell(ds);
   if (!r || !d.tubePasses) return { tube: byShell, shell: byShell, basis: 'shell size' };
@@ -125,6 +134,11 @@ export function billOfMaterials(d: BomInput, rules: BomRules = demoPriceBook, op
   const baffles = bafflesPerShell(d);
   const tb = baffleThickness_m(ds);
   const noz = nozzleSizes(d, ds);
+  // TEMA construction (issue 11); a design stored before it is BEM, priced as it always was
+  const cons = d.construction ?? 'BEM';
+  const uTube = cons === 'BEU';
+  const floating = cons === 'AES' || cons === 'AET';
+  const sheets = uTube ? 1 : 2;
   const h = rules.labourHours;
   const items: BomItem[] = [];
   const mat = (key: string, description: string, quantity: number, unit: string, ref: BomRef) =>
@@ -138,8 +152,11 @@ export function billOfMaterials(d: BomInput, rules: BomRules = demoPriceBook, op
 
   mat('tubes', `Tubes ${d.tubeMaterial} ${tube.od} ${tube.wall}: ${times}${n} × (${d.tubeLength_m} m + ${rules.tubeCutAllowance_m} m cut allowance)`,
     round2(N * n * (d.tubeLength_m + rules.tubeCutAllowance_m)), 'm', { kind: 'tube', material: d.tubeMaterial, ...tube });
-  mat('tubesheets', `Tubesheets ${grades.tubesheets}: ${N > 1 ? `${2 * N} (2 per shell)` : '2'} × ⌀${mm(dts)} × ${mm(tts)} (estimating thickness; the code calculation sets the real one)`,
-    round2(2 * N * discMass(dts, tts, plateDensity(grades.tubesheets))), 'kg', { kind: 'plate', material: grades.tubesheets });
+  mat('tubesheets', `Tubesheets ${grades.tubesheets}: ${N > 1 ? `${sheets * N} (${sheets} per shell)` : `${sheets}`}${uTube ? ' (U-tube bundle: one tubesheet)' : ''} × ⌀${mm(dts)} × ${mm(tts)} (estimating thickness; the code calculation sets the real one)`,
+    round2(sheets * N * discMass(dts, tts, plateDensity(grades.tubesheets))), 'kg', { kind: 'plate', material: grades.tubesheets });
+  if (uTube) {
+    mat('u-bends', `U-bending: ${times}${Math.floor(n / 2)} U-tubes (${n} tube holes)`, N * Math.floor(n / 2), 'each', { kind: 'sundry', item: 'uBendPerTube_minor' });
+  }
   mat('baffles', `Baffles ${grades.baffles}: ${times}${baffles} × segmental (0.8 of ⌀${mm(ds)}) × ${mm(tb)}`,
     round2(N * baffles * BAFFLE_AREA_FRACTION * discMass(ds, tb, plateDensity(grades.baffles))), 'kg', { kind: 'plate', material: grades.baffles });
   if (shell.kind === 'pipe') {
@@ -149,8 +166,17 @@ export function billOfMaterials(d: BomInput, rules: BomRules = demoPriceBook, op
       round2(N * rolledShellMass(ds, shell.wall_m, shellLen)), 'kg', { kind: 'plate', material: 'carbon-steel' });
   }
   mat('heads', `Channel heads (bonnets) for a ${mm(ds)} shell${N > 1 ? `, one pair per shell` : ''}`, N, 'pair', { kind: 'heads', shellDiameter_m: ds });
+  if (floating) {
+    mat('floating-head', `Floating head (${cons}): floating-head cover with split backing ring and a shell cover for a ${mm(ds)} shell, priced as a second pair of heads${N > 1 ? `, one per shell` : ''}`, N, 'pair', { kind: 'heads', shellDiameter_m: ds });
+    mat('gaskets-floating-head', `Gasket set of the floating head and shell cover${N > 1 ? `, one set per shell` : ''}`, N, 'set', { kind: 'sundry', item: 'gasketSet_minor' });
+    mat('bolting-floating-head', `Bolting set of the floating head and shell cover${N > 1 ? `, one set per shell` : ''}`, N, 'set', { kind: 'sundry', item: 'boltingSet_minor' });
+  }
   mat('nozzles-tube', `Tube-side nozzles NPS ${noz.tube} class ${flangeClass} (in + out${each}; by ${noz.basis})`, 2 * N, 'each', { kind: 'nozzle', nps: noz.tube, rating: flangeClass });
   mat('nozzles-shell', `Shell-side nozzles NPS ${noz.shell} class ${flangeClass} (in + out${each}; by ${noz.basis})`, 2 * N, 'each', { kind: 'nozzle', nps: noz.shell, rating: flangeClass });
+  if (d.nozzles?.some((z) => z.impingementPlate)) {
+    const inlet = d.nozzles.find((z) => z.impingementPlate)!;
+    mat('impingement-plate', `Impingement plate under the shell inlet (ρv² ${Math.round(inlet.rhoV2)} kg/(m·s²) above TEMA's 2,230)${each}`, N, 'each', { kind: 'sundry', item: 'impingementPlate_minor' });
+  }
   for (const c of interconnections(N)) {
     const nps = c.side === 'tube' ? noz.tube : noz.shell;
     mat(`interconnection-${c.from}-${c.to}-${c.side}`,
@@ -163,11 +189,12 @@ export function billOfMaterials(d: BomInput, rules: BomRules = demoPriceBook, op
   mat('bolting', `Bolting set (studs and nuts of both heads)${N > 1 ? `, one set per shell` : ''}`, N, 'set', { kind: 'sundry', item: 'boltingSet_minor' });
   mat('paint', `Paint, outside of shell and heads${N > 1 ? `, ${N} shells` : ''}`, round2(N * paintArea_m2(ds, shell.wall_m, shellLen)), 'm²', { kind: 'sundry', item: 'paintPerM2_minor' });
 
-  lab('labour-tube-ends', `Expand tube ends: ${times}2 × ${n} ends × ${h.perTubeEnd} h`, N * 2 * n * h.perTubeEnd, 'perTubeEnd');
+  lab('labour-tube-ends', `Expand tube ends: ${times}${sheets} × ${n} ends × ${h.perTubeEnd} h`, N * sheets * n * h.perTubeEnd, 'perTubeEnd');
   lab('labour-baffles', `Baffles: ${times}${baffles} × ${h.perBaffle} h`, N * baffles * h.perBaffle, 'perBaffle');
   lab('labour-nozzles', `Nozzles: ${times}4 × ${h.perNozzle} h`, N * 4 * h.perNozzle, 'perNozzle');
   const spools = interconnections(N).length;
   lab('labour-interconnections', `Interconnecting spools: ${spools} × 2 flanged ends × ${h.perNozzle} h`, spools * 2 * h.perNozzle, 'perNozzle');
+  if (floating) lab('labour-floating-head', `Fit-up of the floating head and shell cover${N > 1 ? `: ${N} shells × ${h.fitUp} h` : ` (${h.fitUp} h, as a second assembly)`}`, N * h.fitUp, 'fitUp');
   lab('labour-fit-up', `Fit-up and assembly${N > 1 ? `: ${N} shells × ${h.fitUp} h` : ''}`, N * h.fitUp, 'fitUp');
   lab('labour-hydrotest', `Hydrostatic test${N > 1 ? `: ${N} shells × ${h.hydrotest} h (each shell, both sides)` : ''}`, N * h.hydrotest, 'hydrotest');
   lab('labour-paint', `Painting${N > 1 ? `: ${N} shells × ${h.paint} h` : ''}`, N * h.paint, 'paint');

@@ -4,6 +4,7 @@
  */
 import type { PriceBook } from '../../../shared/schemas/price-book';
 import type { BomRef } from './bom';
+import { demoPriceBook } from './demo-price-book';
 import { noPrice } from './errors';
 
 export interface Rate {
@@ -49,6 +50,8 @@ const SUNDRY_NAMES: Record<keyof PriceBook['sundries'], string> = {
   gasketSet_minor: 'gasket set',
   boltingSet_minor: 'bolting set',
   paintPerM2_minor: 'paint per m²',
+  impingementPlate_minor: 'impingement plate',
+  uBendPerTube_minor: 'U-bend per tube',
 };
 
 /** The rate of a BOM item and the entry it came from; a missing entry is a `no-price` PricingError. */
@@ -73,8 +76,14 @@ export function rateOf(ix: BookIndex, ref: BomRef): Rate {
       if (!n) throw noPrice(`nozzles · NPS ${ref.nps} class ${ref.rating}`);
       return { rate_minor: n.each_minor, entry: `nozzles · up to NPS ${n.maxNps} class ${n.rating}` };
     }
-    case 'sundry':
-      return { rate_minor: b.sundries[ref.item], entry: `sundries · ${SUNDRY_NAMES[ref.item]}` };
+    case 'sundry': {
+      const rate = b.sundries[ref.item];
+      if (rate !== undefined) return { rate_minor: rate, entry: `sundries · ${SUNDRY_NAMES[ref.item]}` };
+      // an entry added in issue 11 that a book saved before it lacks: the demo book's figure, said so
+      const demo = demoPriceBook.sundries[ref.item];
+      if (demo === undefined) throw noPrice(`sundries · ${SUNDRY_NAMES[ref.item]}`);
+      return { rate_minor: demo, entry: `sundries · ${SUNDRY_NAMES[ref.item]} (demo book's figure: this book has no entry)` };
+    }
     case 'labour':
       return { rate_minor: b.shopRatePerHour_minor, entry: `shop rate · labour hours ${ref.op}` };
   }

@@ -79,7 +79,8 @@ export const demoPriceBook: PriceBook = priceBookSchema.parse({
     { maxNps: nps, rating: '150' as const, each_minor: c150 },
     { maxNps: nps, rating: '300' as const, each_minor: c300 },
   ]),
-  sundries: { tieRodPerMetre_minor: 450, gasketSet_minor: 8500, boltingSet_minor: 12000, paintPerM2_minor: 1800 },
+  // impingement plate and U-bend (issue 11): invented like every figure here
+  sundries: { tieRodPerMetre_minor: 450, gasketSet_minor: 8500, boltingSet_minor: 12000, paintPerM2_minor: 1800, impingementPlate_minor: 24000, uBendPerTube_minor: 650 },
   labourHours: { perTubeEnd: 0.08, perBaffle: 0.5, perNozzle: 1.5, fitUp: 6, hydrotest: 3, paint: 2 },
   shopRatePerHour_minor: 9500,
   overhead_pct: 18,
