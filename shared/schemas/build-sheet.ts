@@ -49,7 +49,8 @@ export interface BuildSheet {
   baffles: { count: number; total: number; spacing_mm: number; inletSpacing_mm: number; outletSpacing_mm: number; cut_pct: number; cut_mm: number; thickness_mm: number };
   /** one tubesheet's drilling; `quantity` = 2 per shell × shells, all drilled alike */
   tubesheet: { holeCount: number; tieRodHoles: number; holeDiameter_mm: number; pitch_mm: number; layout: number; outerTubeLimit_mm: number; passLanes: number; thickness_mm: number; diameter_mm: number; quantity: number };
-  holes: { n: number; x_mm: number; y_mm: number; kind: 'tube' | 'tie-rod'; pass: number }[];
+  /** `diameter_mm`: the hole's own (a tie rod's is the rod's); absent on sheets made before it */
+  holes: { n: number; x_mm: number; y_mm: number; kind: 'tube' | 'tie-rod'; pass: number; diameter_mm?: number }[];
   /** per shell: in + out on each side; `fluid` is what the nozzle is marked for */
   nozzles: { side: 'tube' | 'shell'; nps: number; rating: string; fluid: string; perShell: number }[];
   joint: string;

@@ -1,7 +1,8 @@
 /**
  * The tubesheet drilling pattern of an order's design, from the engine's own tube layout (the same
  * lattice that gave the tube count): hole centres in mm from the tubesheet centre, tube holes and
- * tie-rod holes, and the pass each tube hole serves. Identical shells in series share the one pattern:
+ * tie-rod holes (TEMA's rods in free room at the rim or in a pass lane, each at the rod's diameter),
+ * and the pass each tube hole serves. Identical shells in series share the one pattern:
  * every tubesheet of the cooler (two per shell) is drilled alike, and the pattern says how many.
  */
 import type { Design } from '../../../shared/schemas/thermal';
@@ -19,6 +20,8 @@ export interface Hole {
   y_mm: number;
   kind: 'tube' | 'tie-rod';
   pass: number;
+  /** this hole's diameter, mm: the tube hole's, or the tie rod's (the rod threads into it) */
+  diameter_mm: number;
 }
 
 export interface DrillingPattern {
@@ -26,6 +29,8 @@ export interface DrillingPattern {
   tubeHoles: number;
   pitch_mm: number;
   holeDiameter_mm: number;
+  /** TEMA RCB-4.71 rods of this shell (memory): how many and their diameter, mm */
+  tieRods: { count: number; diameter_mm: number };
   outerTubeLimit_mm: number;
   layout: Layout;
   /** shells in series, each with two tubesheets */
@@ -71,12 +76,18 @@ export function drillingPattern(design: Design): DrillingPattern {
     }
   }
   const order = [...keep, ...ties].sort((a, b) => lay.y[b]! - lay.y[a]! || lay.x[a]! - lay.x[b]!);
-  const holes = order.map((i, n) => ({ n: n + 1, x_mm: mm(lay.x[i]!), y_mm: mm(lay.y[i]!), kind: lay.tieRod[i] ? ('tie-rod' as const) : ('tube' as const), pass: lay.region[i]! + 1 }));
+  const holeDiameter_mm = mm(design.tubeOuterDiameter_m) + HOLE_OVERSIZE_MM;
+  const rodDiameter_mm = mm(lay.tieRods.diameter_m);
+  const holes = order.map((i, n) => {
+    const rod = lay.tieRod[i] === 1;
+    return { n: n + 1, x_mm: mm(lay.x[i]!), y_mm: mm(lay.y[i]!), kind: rod ? ('tie-rod' as const) : ('tube' as const), pass: lay.region[i]! + 1, diameter_mm: rod ? rodDiameter_mm : holeDiameter_mm };
+  });
   return {
     holes,
     tubeHoles: keep.size,
     pitch_mm: mm(pitch),
-    holeDiameter_mm: mm(design.tubeOuterDiameter_m) + HOLE_OVERSIZE_MM,
+    holeDiameter_mm,
+    tieRods: { count: lay.tieRods.count, diameter_mm: rodDiameter_mm },
     outerTubeLimit_mm: mm(lay.outerTubeLimit_m),
     layout: design.layout,
     shells: shellsOf(design),
@@ -85,12 +96,12 @@ export function drillingPattern(design: Design): DrillingPattern {
 }
 
 /**
- * The CSV the drilling machine reads: one hole a line, mm from the tubesheet centre. The last
- * column repeats how many tubesheets get this pattern (2 per shell), so a file read on its own
- * still says it.
+ * The CSV the drilling machine reads: one hole a line, mm from the tubesheet centre, each with its
+ * own diameter (a tie-rod row gives the rod's). The last column repeats how many tubesheets get this
+ * pattern (2 per shell), so a file read on its own still says it.
  */
 export function drillingCsv(p: DrillingPattern): string {
   const lines = ['hole,x_mm,y_mm,kind,pass,diameter_mm,tubesheets'];
-  for (const h of p.holes) lines.push(`${h.n},${h.x_mm.toFixed(2)},${h.y_mm.toFixed(2)},${h.kind},${h.kind === 'tube' ? h.pass : ''},${h.kind === 'tube' ? p.holeDiameter_mm.toFixed(2) : ''},${p.tubesheets}`);
+  for (const h of p.holes) lines.push(`${h.n},${h.x_mm.toFixed(2)},${h.y_mm.toFixed(2)},${h.kind},${h.kind === 'tube' ? h.pass : ''},${h.diameter_mm.toFixed(2)},${p.tubesheets}`);
   return `${lines.join('\n')}\n`;
 }

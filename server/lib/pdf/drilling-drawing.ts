@@ -1,7 +1,7 @@
 /**
  * A tubesheet drilling pattern drawn to scale in vectors: the plate outline, the outer tube limit
  * (dashed), every hole at its centre with its true diameter (tube holes outlined and shaded by pass,
- * tie-rod holes filled), centre lines with x to the right and y up, as the drilling CSV has them.
+ * tie-rod holes filled, at the rod's diameter where the hole gives its own), centre lines with x to the right and y up, as the drilling CSV has them.
  */
 import { COLOR } from './document';
 import { FONT } from './fonts';
@@ -12,6 +12,8 @@ export interface DrillingHole {
   y_mm: number;
   kind: 'tube' | 'tie-rod';
   pass: number;
+  /** this hole's own diameter, mm; else the drawing's `holeDiameter_mm` */
+  diameter_mm?: number;
 }
 
 export interface DrillingDrawing {
@@ -91,8 +93,7 @@ export function drawDrillingPattern(doc: PDFKit.PDFDocument, d: DrillingDrawing,
   doc.circle(cx, cy, outline).lineWidth(0.9).stroke(COLOR.text);
   doc.circle(cx, cy, pt(d.outerTubeLimit_mm / 2)).lineWidth(0.6).dash(4, { space: 2.5 }).stroke(COLOR.text);
   doc.undash();
-  const r = pt(d.holeDiameter_mm / 2);
-  for (const h of d.holes) drawHole(doc, cx + pt(h.x_mm), cy - pt(h.y_mm), r, h.kind, h.pass);
+  for (const h of d.holes) drawHole(doc, cx + pt(h.x_mm), cy - pt(h.y_mm), pt((h.diameter_mm ?? d.holeDiameter_mm) / 2), h.kind, h.pass);
   doc.restore();
   centreLines(doc, cx, cy, outline + OVERSHOOT);
   doc.fillColor(COLOR.text).strokeColor(COLOR.text).lineWidth(1);
