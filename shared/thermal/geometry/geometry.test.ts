@@ -34,7 +34,7 @@ describe('tube hole layout', () => {
         expect(t.tubeCount).toBe(t.x.length - t.tieRod.reduce((a, b) => a + b, 0));
       }
     }
-  });
+  }, 60_000);
   it('a larger shell holds more tubes; more passes fewer; the layout is deterministic', () => {
     const key = (d: number, passes: number) => ({ shellInnerDiameter_m: d, tubeOuterDiameter_m: od, tubePitch_m: pitch, layout: 30 as const, tubePasses: passes });
     const small = tubeLayout(key(0.3, 1)).tubeCount;
