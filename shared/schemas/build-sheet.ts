@@ -30,6 +30,10 @@ export interface BuildSheet {
     area_m2: number;
     shellsInSeries: number;
     areaPerShell_m2: number;
+    /** issue 11: TEMA type (e.g. "BEU") and class, and why; designs stored before it read BEM, class C */
+    construction?: string;
+    temaClass?: string;
+    constructionReason?: string;
   };
   /** identical shells in series: how many to build and how they connect */
   shells: {
@@ -52,7 +56,11 @@ export interface BuildSheet {
   /** `diameter_mm`: the hole's own (a tie rod's is the rod's); absent on sheets made before it */
   holes: { n: number; x_mm: number; y_mm: number; kind: 'tube' | 'tie-rod'; pass: number; diameter_mm?: number }[];
   /** per shell: in + out on each side; `fluid` is what the nozzle is marked for */
-  nozzles: { side: 'tube' | 'shell'; nps: number; rating: string; fluid: string; perShell: number }[];
+  nozzles: {
+    side: 'tube' | 'shell'; nps: number; rating: string; fluid: string; perShell: number;
+    /** issue 11, from the design's sized nozzles (one entry per side and role, perShell 1): absent on designs before it */
+    role?: 'inlet' | 'outlet'; innerDiameter_mm?: number; velocity_m_s?: number; rhoV2?: number; impingementPlate?: boolean;
+  }[];
   joint: string;
   /** each side at its own fluid's pressure; every shell is tested */
   hydrotest: { tubeSide_Pa: number; shellSide_Pa: number; tubeSideFluid: string; shellSideFluid: string; shells: number; basis: string };

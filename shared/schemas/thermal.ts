@@ -473,6 +473,8 @@ export const designSchema = z.object({
   cases: z.array(caseResultSchema).optional(),
   /** issue 11: the case that needed the largest area (the one the search sized for) */
   governingCase: z.string().optional(),
+  /** issue 11: TEMA's tie rods of one shell (RCB-4.71, memory) as the tubesheet layout places them; absent on designs stored before it */
+  tieRods: z.object({ count: z.int(), diameter_m: num }).optional(),
   /** total over all shells */
   area_m2: num,
   requiredLength_m: num,

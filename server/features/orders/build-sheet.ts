@@ -82,6 +82,7 @@ export function sheetFromDesign(src: { order: BuildSheet['order']; design: Desig
       tubeCount: d.tubeCount, tubeOd: labels.od, tubeWall: labels.wall, tubeMaterial: materialName(d.tubeMaterial), tubeLength_m: d.tubeLength_m,
       tubePasses: d.tubePasses, layout: drilling.layout, pitch_mm: drilling.pitch_mm, shell: shell.label, shellInnerDiameter_mm: Math.round(ds * 1000 * 10) / 10, area_m2: d.area_m2,
       shellsInSeries: N, areaPerShell_m2: d.area_m2 / N,
+      construction: d.construction ?? 'BEM', temaClass: d.temaClass ?? 'C', ...(d.constructionReason ? { constructionReason: d.constructionReason } : {}),
     },
     shells: {
       inSeries: N,
@@ -120,10 +121,16 @@ export function sheetFromDesign(src: { order: BuildSheet['order']; design: Desig
       quantity: drilling.tubesheets,
     },
     holes: drilling.holes,
-    nozzles: [
-      { side: 'tube', nps: nozzles.tube, rating: 'Class 150', fluid: tubeWhat, perShell: 2 },
-      { side: 'shell', nps: nozzles.shell, rating: 'Class 150', fluid: shellWhat, perShell: 2 },
-    ],
+    // the design's sized nozzles (issue 11), one per side and role; older designs: one line per side
+    nozzles: d.nozzles?.length
+      ? d.nozzles.map((z) => ({
+          side: z.side, nps: z.side === 'tube' ? nozzles.tube : nozzles.shell, rating: 'Class 150', fluid: z.side === 'tube' ? tubeWhat : shellWhat, perShell: 1,
+          role: z.role, innerDiameter_mm: Math.round(z.innerDiameter_m * 10000) / 10, velocity_m_s: Math.round(z.velocity_m_s * 100) / 100, rhoV2: Math.round(z.rhoV2), impingementPlate: z.impingementPlate,
+        }))
+      : [
+          { side: 'tube', nps: nozzles.tube, rating: 'Class 150', fluid: tubeWhat, perShell: 2 },
+          { side: 'shell', nps: nozzles.shell, rating: 'Class 150', fluid: shellWhat, perShell: 2 },
+        ],
     joint: d.tubeMaterial.startsWith('stainless') || d.tubeMaterial.startsWith('titanium')
       ? 'Tubes expanded into grooved holes and seal-welded (common practice for this material)'
       : 'Tubes roller-expanded into holes with two grooves (common practice)',
@@ -145,6 +152,7 @@ export function sheetFromDesign(src: { order: BuildSheet['order']; design: Desig
         ? 'Hydrotest shell side, then tube side, at the pressures above, held and inspected for leaks'
         : `Hydrotest each of the ${N} shells: shell side, then tube side, at the pressures above, held and inspected for leaks`,
       `Nozzles marked for their side: tube side ${tubeWhat}, shell side ${shellWhat}`,
+      ...(d.nozzles?.some((z) => z.impingementPlate) ? ['Impingement plate fitted under the shell inlet nozzle, clear of the first tube row'] : []),
       ...(N > 1 ? [`Shells marked 1 to ${N} in flow order; interconnecting spools fitted as listed`] : []),
       'Nameplate, painting and nozzle covers checked before shipment',
     ],
