@@ -2,20 +2,16 @@
  * Operating cases (issue 11): a duty may carry up to four cases besides its design point (summer and
  * winter coolant, clean and fouled, turndown flow), each a partial override of the design duty.
  *
- * How the governing case is found and the design chosen:
- * 1. The design point and each case are sized on their own (the full search of size.ts).
- * 2. The governing case is the one whose recommended design has the largest area.
- * 3. Every candidate of the governing sizing (then of the others, largest area first) is rated under
- *    the design point and every case; the first, in the governing sizing's cost order, whose outlet
- *    reaches each case's target within the pressure-drop limits is recommended. A design larger
- *    than the governing case needs is not searched for: when no candidate meets all, the governing
- *    case's recommended design is returned with a `case-not-met` warning naming the cases it misses.
- * 4. The recommended design (and each candidate) carries `cases`: its outlet, pressure drops and
- *    outlet band under the design point and each case.
+ * How the governing case is found and the design chosen: the design point is sized by the full
+ * search; each candidate's tube length is then raised to the longest any case needs (its required
+ * length from the NTU that case needs, times the design margin, rounded up), the case that set it
+ * is the governing case, and a candidate that then breaks a limit in any case is dropped
+ * (`sizeWithCases`). The geometry (tubes, shell, baffles) stays the one the design point chose.
  */
 import type { CaseResult, Design, OperatingCase, SizeRequest, SizeResult } from '../schemas/thermal';
 import { rateRequestFor, type GeometryChoice } from './evaluate';
 import { ThermalInputError } from './errors';
+import { ntuShellsInSeries } from './exchanger/effectiveness';
 import { rateParsed } from './rate';
 
 /** The name the design point goes by in the case list. */
@@ -85,54 +81,124 @@ export function rateAllCases(req: SizeRequest, d: Design): CaseResult[] {
 }
 
 /**
- * Sizes a duty with operating cases (steps 1–4 above). `sizeOne` sizes one case-free request.
+ * Length at which design `d` just reaches one case's target, m: from its rating at `length`, the
+ * effectiveness the target needs (`ε_req = ε (T_in − T_target)/(T_in − T_out)`, the Cmin stream's
+ * temperature change scales with the duty), its NTU through the arrangement's relation (shells in
+ * series of 1-n passes; a wall: `ln((T_in − T_w)/(T_target − T_w))`), and the length scaled by
+ * NTU_req/NTU (U taken as independent of length), three times. `Infinity` when unreachable.
  */
-export function sizeWithCases(req: SizeRequest, sizeOne: (r: SizeRequest) => SizeResult): SizeResult {
-  const cases = allCases(req);
-  const sized = cases.map(({ name, duty }, i) => {
-    try {
-      return { name, result: sizeOne(duty) };
-    } catch (err) {
-      if (err instanceof ThermalInputError && i > 0) {
-        throw new ThermalInputError(err.code, `Operating case '${name}': ${err.message}`, `cases.${i - 1}`);
-      }
-      throw err;
+export function caseRequiredLength(duty: SizeRequest, d: Design): number {
+  const target = duty.process.outletTemp_C;
+  const tIn = duty.process.inletTemp_C;
+  let length = d.tubeLength_m;
+  for (let it = 0; it < 3; it++) {
+    const r = rateParsed(rateRequestFor(duty, d as GeometryChoice, length), { profilePoints: 0 });
+    const ntu = r.ntu ?? 0;
+    if (!(ntu > 0) || !(tIn - r.outletTemp_C > 0)) return Infinity;
+    let need: number;
+    if (duty.boundary.kind === 'wall') {
+      const tw = duty.boundary.wallTemp_C;
+      if (target <= tw) return Infinity;
+      need = Math.log((tIn - tw) / (target - tw));
+    } else {
+      const dh = tIn - r.outletTemp_C;
+      const dc = (r.coolantOutletTemp_C ?? duty.boundary.inletTemp_C) - duty.boundary.inletTemp_C;
+      const cr = dc > 0 ? Math.min(dh, dc) / Math.max(dh, dc) : 0;
+      const eps = (r.effectiveness ?? 0) * ((tIn - target) / dh);
+      need = eps >= 1 ? Infinity : ntuShellsInSeries(eps, cr, d.tubePasses, d.shellsInSeries ?? 1);
     }
-  });
-  const order = [...sized].sort((a, b) => b.result.recommended.area_m2 - a.result.recommended.area_m2);
-  const governing = order[0]!;
-  let chosen: Design | undefined;
-  let chosenFrom = governing;
-  for (const s of order) {
-    for (const d of s.result.candidates) {
-      const rs = rateAllCases(req, d);
-      if (rs.every((r) => r.meets)) {
-        chosen = { ...d, cases: rs };
-        chosenFrom = s;
-        break;
-      }
-    }
-    if (chosen) break;
+    if (!Number.isFinite(need)) return Infinity;
+    const next = (length * need) / ntu;
+    if (Math.abs(next - length) < 1e-4 * length) return next;
+    length = next;
   }
-  const warnings = [...governing.result.warnings];
-  if (!chosen) {
-    const d = governing.result.recommended;
-    const rs = rateAllCases(req, d);
-    chosen = { ...d, cases: rs };
-    const missed = rs.filter((r) => !r.meets).map((r) => `'${r.name}'`).join(', ');
-    warnings.push({ code: 'case-not-met', message: `No design the search found meets every operating case: the design sized for the governing case '${governing.name}' misses ${missed} (outlet above its target or a pressure drop over its limit).` });
-  }
-  chosen.governingCase = governing.name;
-  chosen.recommendedReason = `${chosen.recommendedReason ?? ''} Sized for the governing operating case '${governing.name}' (the one needing the largest area, ${governing.result.recommended.area_m2.toFixed(1)} m²) and rated under all ${cases.length}.`.trim();
-  const others = chosenFrom.result.candidates.filter((d) => d.cost !== chosen!.cost || d.tubeLength_m !== chosen!.tubeLength_m || d.tubeCount !== chosen!.tubeCount);
-  const candidates = [chosen, ...others.map((d) => ({ ...d, cases: rateAllCases(req, d), governingCase: governing.name }))];
-  return {
-    recommended: chosen,
-    candidates,
-    evaluated: sized.reduce((n, s) => n + s.result.evaluated, 0),
-    feasible: sized.reduce((n, s) => n + s.result.feasible, 0),
-    warnings,
-    cases: chosen.cases,
-    governingCase: governing.name,
+  return length;
+}
+
+/** The design `d` re-rated at a longer tube length under the design point (walls do not depend on length). */
+function atLength(duty: SizeRequest, d: Design, length: number, required: number, costOf: (d: Design) => number): Design {
+  const rating = rateParsed(rateRequestFor(duty, d as GeometryChoice, length), { profilePoints: 21 });
+  rating.warnings.push(...d.rating.warnings.filter((w) => /wall/.test(w.code)));
+  const out: Design = {
+    ...d,
+    tubeLength_m: length,
+    rating,
+    area_m2: rating.area_m2,
+    requiredLength_m: required,
+    overSurface_pct: (length / required - 1) * 100,
+    ...(rating.baffleCount !== undefined ? { baffleCount: rating.baffleCount, inletBaffleSpacing_m: rating.inletBaffleSpacing_m, outletBaffleSpacing_m: rating.outletBaffleSpacing_m } : {}),
   };
+  out.cost = costOf(out);
+  return out;
+}
+
+export interface CaseSizing {
+  /** sizes one case-free request (size.ts) */
+  sizeOne: (r: SizeRequest) => SizeResult;
+  /** the cost function the search ranked with */
+  costOf: (d: Design) => number;
+  /** the shop's length step, m */
+  step: number;
+  /** 1 + the design margin */
+  margin: number;
+}
+
+/**
+ * Sizes a duty with operating cases (steps 1–4 in the header, as implemented):
+ * 1. The design point is sized (size.ts, with the margin).
+ * 2. For each candidate, each case's required length is found (`caseRequiredLength`); the
+ *    candidate's tube length becomes the longest of them × (1 + margin), rounded up to the shop's
+ *    step (never shorter than it was); the case that set it is that candidate's governing case.
+ * 3. A lengthened candidate is re-rated under the design point (evaluate.ts) and dropped when it
+ *    breaks the length limit, L/D_s, a pressure-drop limit in any case, or the vibration screen.
+ * 4. The first surviving candidate in the search's order is recommended; every candidate carries
+ *    `cases`. No survivor: a 422 naming the case that ruled most candidates out.
+ */
+export function sizeWithCases(req: SizeRequest, how: CaseSizing): SizeResult {
+  const cases = allCases(req);
+  const base = how.sizeOne(cases[0]!.duty);
+  const c = req.constraints;
+  const out: Design[] = [];
+  const blame = new Map<number, number>();
+  const fail = (i: number) => blame.set(i, (blame.get(i) ?? 0) + 1);
+  for (const d0 of base.candidates) {
+    const need = cases.map(({ duty }) => {
+      try {
+        return caseRequiredLength(duty, d0);
+      } catch (err) {
+        if (err instanceof ThermalInputError) return Infinity;
+        throw err;
+      }
+    });
+    const worst = need.reduce((w, x, i) => (x > need[w]! ? i : w), 0);
+    if (!Number.isFinite(need[worst]!)) { fail(worst); continue; }
+    const length = Math.max(d0.tubeLength_m, Math.round(Math.ceil((need[worst]! * how.margin) / how.step - 1e-9) * how.step * 1e9) / 1e9);
+    if (length > c.maxTubeLength_m + 1e-9 || (d0.shellInnerDiameter_m && length / d0.shellInnerDiameter_m > 15)) { fail(worst); continue; }
+    let d = d0;
+    if (length > d0.tubeLength_m + 1e-9) {
+      try {
+        d = atLength(cases[0]!.duty, d0, length, need[0]!, how.costOf);
+      } catch (err) {
+        if (err instanceof ThermalInputError) { fail(worst); continue; }
+        throw err;
+      }
+      if (d.rating.vibration && !d.rating.vibration.ok) { fail(worst); continue; }
+    }
+    const rs = rateAllCases(req, d);
+    const bad = rs.findIndex((r) => !r.meets);
+    if (bad >= 0) { fail(bad); continue; }
+    out.push({ ...d, cases: rs, governingCase: cases[worst]!.name });
+  }
+  if (out.length === 0) {
+    const [i] = [...blame.entries()].sort((a, b) => b[1] - a[1])[0] ?? [0];
+    const name = cases[i]!.name;
+    throw new ThermalInputError(
+      'no-feasible-design',
+      `No design meets operating case '${name}' within the limits (${base.candidates.length} designs sized for the design point tried, lengthened as far as the limits allow): relax the case or the limits.`,
+      i > 0 ? `cases.${i - 1}` : 'process.outletTemp_C',
+    );
+  }
+  const chosen = out[0]!;
+  chosen.recommendedReason = `${base.recommended.recommendedReason ?? ''} Operating cases: ${chosen.governingCase === DESIGN_POINT_NAME ? 'the design point governs' : `'${chosen.governingCase}' governs (it needs the longest tubes; the length was raised for it)`}, and the design is rated under all ${cases.length}.`.trim();
+  return { recommended: chosen, candidates: out, evaluated: base.evaluated, feasible: base.feasible, warnings: base.warnings, cases: chosen.cases, governingCase: chosen.governingCase };
 }

@@ -57,7 +57,14 @@ const RELAX: Record<Reason, [string, string]> = {
 
 /** Sizes a parsed request; with operating cases, for the governing one, rating all (size-cases.ts). */
 export function sizeParsed(req: SizeRequest, opts: SizeOptions = {}): SizeResult {
-  if (req.cases?.length) return sizeWithCases(req, (r) => sizeOne(r, opts));
+  if (req.cases?.length) {
+    return sizeWithCases(req, {
+      sizeOne: (r) => sizeOne(r, opts),
+      costOf: (d) => (opts.costOf ?? costProxy)(d as CostInput),
+      step: req.constraints.lengthStep_m ?? opts.lengthStep_m ?? DEFAULT_LENGTH_STEP_M,
+      margin: 1 + designMarginOf(req, opts) / 100,
+    });
+  }
   return sizeOne(req, opts);
 }
 
