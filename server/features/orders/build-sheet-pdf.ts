@@ -87,6 +87,7 @@ function drawDesignAndCuts(doc: PDFKit.PDFDocument, s: BuildSheet): void {
     ['Layout', layoutName(d.layout)],
     ['Pitch', mm(d.pitch_mm)],
     ['Shell', `${d.shell}, ${mm(d.shellInnerDiameter_mm)} ID`],
+    ...(d.construction ? [['Construction (TEMA)', `${d.construction}, class ${d.temaClass ?? 'C'}`] as [string, string]] : []),
     ['Heat-transfer area', area],
   ]));
   if (n > 1) {
@@ -146,7 +147,9 @@ function drawShellParts(doc: PDFKit.PDFDocument, s: BuildSheet): void {
   const b = s.baffles;
   const n = s.shells.inSeries;
   const nozzle = (side: 'tube' | 'shell') =>
-    s.nozzles.filter((x) => x.side === side).map((x) => `NPS ${formatNumber(x.nps, 3)}, ${x.rating}, ${x.perShell} per shell (in + out), marked ${x.fluid}`).join('; ') || '–';
+    s.nozzles.filter((x) => x.side === side).map((x) => x.role
+      ? `${x.role} NPS ${formatNumber(x.nps, 3)} (${x.innerDiameter_mm} mm bore), ${x.rating}, ${x.velocity_m_s} m/s, ρv² ${x.rhoV2} kg/(m·s²)${x.impingementPlate ? ', impingement plate' : ''}, marked ${x.fluid}`
+      : `NPS ${formatNumber(x.nps, 3)}, ${x.rating}, ${x.perShell} per shell (in + out), marked ${x.fluid}`).join('; ') || '–';
   const spacing = b.inletSpacing_mm === b.spacing_mm && b.outletSpacing_mm === b.spacing_mm
     ? `${mm(b.spacing_mm)} (inlet and outlet the same)`
     : `${mm(b.spacing_mm)} central; inlet ${mm(b.inletSpacing_mm)}, outlet ${mm(b.outletSpacing_mm)}`;

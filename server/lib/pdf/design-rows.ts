@@ -60,6 +60,7 @@ export function designPairs(d: Design, units: UnitSystem, duty?: SizeRequest): [
     const label = d.shellLabel ? `${d.shellLabel}, ` : '';
     pairs.push(['Shell', `${label}${showQuantity(d.shellInnerDiameter_m, 'length', units)} ID`]);
   }
+  pairs.push(...constructionPairs(d, units));
   if (d.baffleSpacing_m !== undefined) {
     const q = (v: number) => showQuantity(v, 'length', units);
     const ends = d.inletBaffleSpacing_m !== undefined || d.outletBaffleSpacing_m !== undefined
@@ -99,11 +100,36 @@ export function wallPairs(d: Design, units: UnitSystem, duty?: SizeRequest): [st
   return out;
 }
 
+const CONSTRUCTION_NAMES: Record<string, string> = {
+  BEM: 'fixed tubesheets', BEU: 'U-tube bundle', AES: 'split-ring floating head', AET: 'pull-through floating head',
+};
+const TEMA_CLASS_NAMES: Record<string, string> = { R: 'severe process service', C: 'general commercial service', B: 'chemical process service' };
+
+/**
+ * Issue 11: the TEMA construction and class, and each side's nozzles (size, velocity and ρv² at
+ * inlet and outlet, an impingement plate at the shell inlet). Designs stored before it: no rows.
+ */
+export function constructionPairs(d: Design, units: UnitSystem): [string, string][] {
+  const out: [string, string][] = [];
+  if (d.construction) {
+    const cls = d.temaClass ?? 'C';
+    out.push(['Construction (TEMA)', `${d.construction} (${CONSTRUCTION_NAMES[d.construction] ?? d.construction}), class ${cls} (${TEMA_CLASS_NAMES[cls] ?? cls})`]);
+  }
+  for (const side of ['tube', 'shell'] as const) {
+    const ns = (d.nozzles ?? []).filter((z) => z.side === side);
+    if (!ns.length) continue;
+    const at = ns.map((z) => `${z.role} ${z.label} ${showQuantity(z.velocity_m_s, 'velocity', units)}, ρv² ${formatNumber(z.rhoV2, 3)} kg/(m·s²)${z.impingementPlate ? ', impingement plate' : ''}`);
+    out.push([side === 'tube' ? 'Tube-side nozzles' : 'Shell-side nozzles', at.join('; ')]);
+  }
+  return out;
+}
+
 /** The design's reasons in words, each a sentence or two: why this allocation, why this design won. */
 export function designReasons(d: Design): string[] {
   const out: string[] = [];
   if (d.allocationReason) out.push(`Why this allocation: ${d.allocationReason}`);
   if (d.recommendedReason) out.push(`Why this design: ${d.recommendedReason}`);
+  if (d.constructionReason) out.push(`Why this construction: ${d.constructionReason}`);
   return out;
 }
 
