@@ -16,7 +16,7 @@ import { resolveStream } from './exchanger/streams';
 import { bafflePlan, DEFAULT_BAFFLE_CUT } from './geometry/baffles';
 import { STANDARD_SHELLS } from './geometry/shells';
 import { MIN_PITCH_RATIO, tubeSizeOf } from './geometry/tubes';
-import type { Layout } from './geometry/layout';
+import { designTieRods, type Layout } from './geometry/layout';
 import { rateParsed } from './rate';
 import { rateAllCases } from './size-cases';
 
@@ -160,6 +160,7 @@ export function evaluateDesign(duty: SizeRequest, g: GeometryChoice, costOf: (d:
   const design: Design = {
     ...base,
     ...designWallFields(walls),
+    ...(duty.boundary.kind === 'coolant' ? designTieRods(base) : {}),
     // nozzles and construction (issue 11): a nozzle wider than half the shell stays as a hard finding in the warnings
     ...(rating.nozzles ? { nozzles: designNozzles(rating.nozzles) } : {}),
     ...constructionFor(duty, { processSide: base.processSide, tubePasses: g.tubePasses, rating }),

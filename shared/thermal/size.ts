@@ -20,6 +20,7 @@ import { requiredLengthCoolant, type DutyContext } from './exchanger/required-le
 import { shellMethod } from './exchanger/shell-methods';
 import { SHELL_ASPECT } from './exchanger/shell-side';
 import { bafflePlan, SEARCH_BAFFLE_CUTS } from './geometry/baffles';
+import { designTieRods } from './geometry/layout';
 import { sizeWithCases } from './size-cases';
 import { dutyContext } from './size-duty';
 import { distinct, distinctKey, spanning } from './size-pick';
@@ -203,6 +204,7 @@ function rateCandidate(st: SearchState, p: Pre): Design | null {
     return {
       ...design,
       ...designWallFields(walls),
+      ...(p.shell ? designTieRods(input) : {}),
       ...(rating.nozzles ? { nozzles: designNozzles(rating.nozzles) } : {}),
       ...(p.shell ? constructionFor(req, { processSide: p.input.processSide, tubePasses: bundle.passes, rating }) : {}),
       ...(plan ? { inletBaffleSpacing_m: plan.inlet, outletBaffleSpacing_m: plan.outlet } : { baffleCut: undefined, baffleCount: undefined }),

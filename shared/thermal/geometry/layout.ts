@@ -8,6 +8,7 @@
 import { LRUCache } from 'lru-cache';
 import { shellToBaffleClearanceTema } from '../exchanger/tema-clearances';
 import { bundleClearance } from './shells';
+import { MIN_PITCH_RATIO } from './tubes';
 import { TIE_ROD_LIGAMENT_M, placeTieRods, temaTieRods, type TieRods } from './tie-rods';
 
 /** Tube layout angles (TEMA): 30° triangular, 60° rotated triangular, 90° square, 45° rotated square. */
@@ -173,4 +174,14 @@ export function tubeLayout(k: TubeLayoutKey): TubeLayout {
 /** Number of tubes the shell holds for this OD, pitch, layout and pass count. */
 export function tubeCountInShell(k: TubeLayoutKey): number {
   return tubeLayout(k).tubeCount;
+}
+
+/**
+ * The design record's tie rods: TEMA's count and diameter for its shell, as many as the layout
+ * placed (`{}` for a design without a shell or layout).
+ */
+export function designTieRods(d: { shellInnerDiameter_m?: number; tubeOuterDiameter_m: number; tubePitch_m?: number; layout?: Layout; tubePasses: number }): { tieRods?: TieRods } {
+  if (d.shellInnerDiameter_m === undefined || d.layout === undefined) return {};
+  const pitch = d.tubePitch_m ?? MIN_PITCH_RATIO * d.tubeOuterDiameter_m;
+  return { tieRods: tubeLayout({ shellInnerDiameter_m: d.shellInnerDiameter_m, tubeOuterDiameter_m: d.tubeOuterDiameter_m, tubePitch_m: pitch, layout: d.layout, tubePasses: d.tubePasses }).tieRods };
 }
