@@ -5,8 +5,8 @@
  * Melinder's fits are polynomials in concentration as well as temperature, so a mixture at any mass
  * fraction inside the fit is evaluated directly (no interpolation between tabled strengths); the
  * freezing point comes from the same source's polynomial in concentration. The fit covers 0–60 % glycol
- * by mass; the library starts at 10 % because weaker mixtures are water with little frost protection and
- * inhibitor packages are not made for them (common practice).
+ * by mass; the library starts at 10 % because weaker mixtures give almost no frost protection (freezing
+ * point above −3.4 °C) and are used as water (common practice).
  *
  * Library ids: `ethylene-glycol-<p>` and `propylene-glycol-<p>` for p = 10, 15, …, 60 (% by mass), so
  * the former ids `ethylene-glycol-30`, `-50`, `propylene-glycol-30`, `-50` keep their meaning.
