@@ -41,3 +41,24 @@ describe('drilling data with the tie rods as their own holes', () => {
     expect(radii.filter((r) => Math.abs(r - paperPt(p.holeDiameter_mm / 2, reduction)) < 1e-9)).toHaveLength(4);
   });
 });
+
+describe('room for the impingement plate under the shell inlet', () => {
+  const nps12 = PIPE_SHELLS.find((s) => s.label === 'NPS 12 STD')!.innerDiameter_m;
+  const plated = (tubeCount: number) =>
+    ({
+      tubeCount, tubePasses: 2, tubeOuterDiameter_m: 0.75 * IN, tubePitch_m: 1.25 * 0.75 * IN, layout: 30, shellInnerDiameter_m: nps12, shellsInSeries: 1,
+      nozzles: [{ side: 'shell', role: 'inlet', label: 'NPS 3', innerDiameter_m: 0.07792, velocity_m_s: 2.5, rhoV2: 5400, impingementPlate: true }],
+    }) as unknown as Design;
+  it('a design with a plate and tubes to spare leaves the room under the inlet (D_n/4 + 6 mm) free of tube holes', () => {
+    const p = drillingPattern(plated(80));
+    expect(p.clearUnderInlet_mm).toBeCloseTo(77.92 / 4 + 6, 1);
+    const top = nps12 * 500 - p.clearUnderInlet_mm;
+    for (const h of p.holes.filter((x) => x.kind === 'tube')) expect(h.y_mm + 19.05 / 2).toBeLessThanOrEqual(top + 0.01);
+    expect(p.tubeHoles).toBe(80);
+  });
+  it('when the shell needs every hole for the design’s tubes, the full layout is drilled and says no room was kept', () => {
+    const p = drillingPattern(plated(110));
+    expect(p.clearUnderInlet_mm).toBe(0);
+    expect(p.tubeHoles).toBe(110);
+  });
+});

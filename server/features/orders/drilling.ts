@@ -7,7 +7,7 @@
  */
 import type { Design } from '../../../shared/schemas/thermal';
 import { MIN_PITCH_RATIO } from '../../../shared/thermal/geometry/tubes';
-import { tubeLayout, type Layout } from '../../../shared/thermal/geometry/layout';
+import { impingementClearance, tubeLayout, type Layout } from '../../../shared/thermal/geometry/layout';
 import { unprocessable } from '../../lib/errors';
 import { shellsOf } from '../pricing/design-fields';
 
@@ -29,6 +29,8 @@ export interface DrillingPattern {
   tubeHoles: number;
   pitch_mm: number;
   holeDiameter_mm: number;
+  /** room kept free of tubes under the shell inlet for its impingement plate, mm (0: none or no room to spare) */
+  clearUnderInlet_mm: number;
   /** TEMA RCB-4.71 rods of this shell (memory): how many and their diameter, mm */
   tieRods: { count: number; diameter_mm: number };
   outerTubeLimit_mm: number;
@@ -46,13 +48,18 @@ export function drillingPattern(design: Design): DrillingPattern {
     throw unprocessable('This design has no shell or layout to drill; set them in the quote first.', 'no-layout');
   }
   const pitch = design.tubePitch_m ?? MIN_PITCH_RATIO * design.tubeOuterDiameter_m;
-  const lay = tubeLayout({
+  const key = {
     shellInnerDiameter_m: design.shellInnerDiameter_m,
     tubeOuterDiameter_m: design.tubeOuterDiameter_m,
     tubePitch_m: pitch,
     layout: design.layout,
     tubePasses: design.tubePasses,
-  });
+  };
+  // an impingement plate under the shell inlet (design.nozzles): leave its room free of tubes when
+  // the shell still holds the design's tubes without them; else drill the full layout
+  const plate = design.nozzles?.find((z) => z.side === 'shell' && z.role === 'inlet' && z.impingementPlate);
+  const cleared = plate ? tubeLayout({ ...key, clearUnderInlet_m: impingementClearance(plate.innerDiameter_m) }) : undefined;
+  const lay = cleared && cleared.tubeCount >= design.tubeCount ? cleared : tubeLayout(key);
   if (lay.tubeCount < design.tubeCount) {
     throw unprocessable(`The ${mm(design.shellInnerDiameter_m)} mm shell holds ${lay.tubeCount} tubes at this pitch and layout, fewer than the ${design.tubeCount} of the design.`, 'shell-too-small');
   }
@@ -88,6 +95,7 @@ export function drillingPattern(design: Design): DrillingPattern {
     pitch_mm: mm(pitch),
     holeDiameter_mm,
     tieRods: { count: lay.tieRods.count, diameter_mm: rodDiameter_mm },
+    clearUnderInlet_mm: lay === cleared && plate ? mm(impingementClearance(plate.innerDiameter_m)) : 0,
     outerTubeLimit_mm: mm(lay.outerTubeLimit_m),
     layout: design.layout,
     shells: shellsOf(design),

@@ -171,6 +171,18 @@ export function tubeLayout(k: TubeLayoutKey): TubeLayout {
   return result;
 }
 
+/** 6 mm: impingement plate thickness (common practice). */
+export const IMPINGEMENT_PLATE_THICKNESS_M = 0.006;
+
+/**
+ * Room under a shell inlet nozzle of bore D_n for its impingement plate, m: the plate stands D_n/4
+ * off the shell wall, so the escape area around it (π D_n · D_n/4) equals the nozzle's bore area,
+ * plus the plate's thickness (common practice; TEMA RCB-4.6 asks for enough entrance area, memory).
+ */
+export function impingementClearance(nozzleBore_m: number): number {
+  return nozzleBore_m / 4 + IMPINGEMENT_PLATE_THICKNESS_M;
+}
+
 /** Number of tubes the shell holds for this OD, pitch, layout and pass count. */
 export function tubeCountInShell(k: TubeLayoutKey): number {
   return tubeLayout(k).tubeCount;
