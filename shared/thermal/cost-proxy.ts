@@ -34,6 +34,9 @@ export type CostInput = Pick<Design, 'tubeCount' | 'tubeLength_m' | 'tubeOuterDi
   /** per shell; default from the spacing */
   baffleCount?: number;
   processSide?: 'tubes' | 'shell';
+  /** issue 11: the rated design's nozzles and TEMA type (absent on a search candidate: flow-free nozzles, BEM) */
+  nozzles?: Design['nozzles'];
+  construction?: Design['construction'];
 };
 
 /**

@@ -199,16 +199,19 @@ function rateCandidate(st: SearchState, p: Pre): Design | null {
     const walls = checkWalls(input, wallSides(req, p.input.processSide));
     if (!walls.ok) { st.reasons.wall++; return null; }
     rating.warnings.push(...walls.findings);
+    // nozzles and construction (issue 11) before the cost: the price follows them
+    const nozzles = rating.nozzles ? designNozzles(rating.nozzles) : undefined;
+    const cons = p.shell ? constructionFor(req, { processSide: p.input.processSide, tubePasses: bundle.passes, rating }) : undefined;
     const { shellWall_m: _w, ...design } = input;
     void _w;
     return {
       ...design,
       ...designWallFields(walls),
       ...(p.shell ? designTieRods(input) : {}),
-      ...(rating.nozzles ? { nozzles: designNozzles(rating.nozzles) } : {}),
-      ...(p.shell ? constructionFor(req, { processSide: p.input.processSide, tubePasses: bundle.passes, rating }) : {}),
+      ...(nozzles ? { nozzles } : {}),
+      ...cons,
       ...(plan ? { inletBaffleSpacing_m: plan.inlet, outletBaffleSpacing_m: plan.outlet } : { baffleCut: undefined, baffleCount: undefined }),
-      area_m2: area, requiredLength_m: p.requiredLength, overSurface_pct: (bundle.length / p.requiredLength - 1) * 100, cost: st.costOf(input), rating,
+      area_m2: area, requiredLength_m: p.requiredLength, overSurface_pct: (bundle.length / p.requiredLength - 1) * 100, cost: st.costOf({ ...input, nozzles, construction: cons?.construction }), rating,
     };
   }
   return null;

@@ -6,7 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import { billOfMaterials } from '../../server/features/pricing/bom';
 import { demoPriceBook } from '../../server/features/pricing/demo-price-book';
-import { priceDesign } from '../../server/features/pricing/price';
+import { costFromPriceBook, priceDesign } from '../../server/features/pricing/price';
 import type { DesignNozzle } from '../../shared/schemas/thermal';
 import { smallCooler } from './pricing-fixture';
 
@@ -66,5 +66,23 @@ describe('bill of materials: nozzles and construction (issue 11)', () => {
     const line = priceDesign({ ...smallCooler, nozzles }, book, 3, { quantity: 1 }).lines.find((l) => l.key === 'impingement-plate')!;
     expect(line.amount_minor).toBe(24_000);
     expect(line.source).toMatch(/demo book's figure/);
+  });
+});
+
+describe('the search cost function follows the nozzles and the construction (issue 11)', () => {
+  const costOf = costFromPriceBook(demoPriceBook);
+  const unit = (d: Parameters<typeof priceDesign>[0]) => priceDesign(d, demoPriceBook, 1, { quantity: 1 }).unit_minor;
+  for (const [name, d] of [
+    ['sized nozzles with a plate', { ...smallCooler, nozzles }],
+    ['U-tubes', { ...smallCooler, construction: 'BEU' as const }],
+    ['floating head', { ...smallCooler, construction: 'AES' as const }],
+    ['floating head, two shells, sized nozzles', { ...smallCooler, construction: 'AES' as const, nozzles, shellsInSeries: 2 }],
+  ] as const) {
+    it(`agrees with the itemised unit price to within rounding: ${name}`, () => {
+      expect(Math.abs(costOf(d) - unit(d))).toBeLessThan(60);
+    });
+  }
+  it('an old design (no construction) costs as before, BEM', () => {
+    expect(costOf({ ...smallCooler, construction: 'BEM' })).toBe(costOf(smallCooler));
   });
 });
