@@ -95,6 +95,18 @@ export function placeTieRods(f: TieRodField): TieRodPlacement {
     }
     return out;
   };
+  const free0 = (px: number, py: number): boolean => {
+    const ci = Math.floor(px / cell);
+    const cj = Math.floor(py / cell);
+    for (let a = ci - 1; a <= ci + 1; a++) {
+      for (let b = cj - 1; b <= cj + 1; b++) {
+        const list = grid.get(keyOf(a, b));
+        if (!list) continue;
+        for (const k of list) if (!displaced.has(k) && Math.hypot(f.x[k]! - px, f.y[k]! - py) < clear - 1e-9) return false;
+      }
+    }
+    return true;
+  };
   // candidates bucketed by the rod sector they fall in: free room on rings at the rim and on the
   // lane centre lines; the tube holes themselves only when a sector has no free room
   const rEdge = Math.max(0, f.rEdge_m);
@@ -134,7 +146,7 @@ export function placeTieRods(f: TieRodField): TieRodPlacement {
     let pick: { px: number; py: number; hits: number[] } | undefined;
     for (const c of freeBy[t]!) {
       if (nearRod(c.px, c.py)) continue;
-      if (conflicts(c.px, c.py).length === 0) { pick = { px: c.px, py: c.py, hits: [] }; break; }
+      if (free0(c.px, c.py)) { pick = { px: c.px, py: c.py, hits: [] }; break; }
     }
     // else the position that displaces the fewest tube holes
     if (!pick) {
