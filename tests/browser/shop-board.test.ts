@@ -160,6 +160,11 @@ test('on a phone the board stacks its columns and the build sheet still draws th
   await page.locator(card(order.number)).locator(sel('card-build-sheet')).click();
   await page.locator(sel('drilling-svg')).waitFor();
   expect(await page.locator(`${sel('drill-hole')}[data-kind="tube"]`).count()).toBe(order.tubeCount);
+  // the shells, the fluids and the tubesheet count follow the order's sheet (two tubesheets a shell)
+  const sheet = await api<{ shells: { inSeries: number }; allocation: { shellSide: { stream: string } } }>(sales, 'GET', `/orders/${order.orderId}/build-sheet`);
+  expect(await page.locator(sel('sheet-shells')).getAttribute('data-shells')).toBe(String(sheet.shells.inSeries));
+  expect(await page.locator(sel('drill-quantity')).getAttribute('data-quantity')).toBe(String(2 * sheet.shells.inSeries));
+  expect(await page.locator(sel('alloc-shell')).getAttribute('data-stream')).toBe(sheet.allocation.shellSide.stream);
   expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(phone.width);
   await shot(page, 'build-sheet-390');
 });
