@@ -192,7 +192,7 @@ describe('orders and the shop', () => {
     await admin.post(`/api/orders/${orderId}/cancel`).send({ reason: 'Customer insolvent.' }).expect(200);
   });
 
-  it('the drilling CSV has one tube hole per tube, all inside the outer tube limit and at least a pitch apart', async () => {
+  it('the drilling CSV has one tube hole per tube, all inside the outer tube limit and at least a pitch apart; tie rods on their own rows at their diameter, clear of the tubes', async () => {
     const { orderId } = await paidOrder();
     const order = (await shop.get(`/api/orders/${orderId}`)).body;
     const sheet = (await shop.get(`/api/orders/${orderId}/build-sheet`).expect(200)).body;
@@ -207,7 +207,15 @@ describe('orders and the shop', () => {
     for (const r of rows) expect(Number(r[6])).toBe(2 * shells);
     const od = order.design.tubeOuterDiameter_m * 1000;
     const pitch = sheet.tubesheet.pitch_mm;
-    const all = rows.map((r) => ({ x: Number(r[1]), y: Number(r[2]) }));
+    const all = tubes;
+    // tie rods (TEMA RCB-4.71): their own rows with the rod's diameter, in free room at the rim or in a lane, inside the shell
+    const rods = rows.filter((r) => r[3] === 'tie-rod').map((r) => ({ x: Number(r[1]), y: Number(r[2]), d: Number(r[5]) }));
+    expect(rods.length).toBeGreaterThanOrEqual(4);
+    for (const rod of rods) {
+      expect(rod.d).toBeGreaterThan(6);
+      expect(Math.hypot(rod.x, rod.y) + rod.d / 2).toBeLessThan(order.design.shellInnerDiameter_m * 500);
+      for (const t of tubes) expect(Math.hypot(rod.x - t.x, rod.y - t.y)).toBeGreaterThanOrEqual((rod.d + od) / 2 - 0.02);
+    }
     for (const p of all) expect(Math.hypot(p.x, p.y) + od / 2).toBeLessThanOrEqual(sheet.tubesheet.outerTubeLimit_mm / 2 + 0.01);
     let nearest = Infinity;
     for (let i = 0; i < all.length; i++) {
