@@ -9,16 +9,18 @@
  */
 import { reactive, ref } from 'vue';
 import { createQuoteSchema, type QuoteDetail } from '@shared/schemas/quotes';
+import type { OperatingCase } from '@shared/schemas/thermal';
 import { ApiError, errorMessage, isApiError, type FieldErrors } from '../api/http';
 import { createQuote } from '../api/quotes';
 import { useQuoteUploads } from './use-quote-uploads';
 import { useSizingForm } from './use-sizing-form';
+import { quantityToSI, type Quantity } from './use-units';
 import type { Explanation } from './use-sizing-run';
 import { useZodForm } from './use-zod-form';
 
 const detailsSchema = createQuoteSchema.omit({ duty: true });
 const DUTY_PREFIX = 'duty.';
-const DUTY_ROOTS = ['process.', 'boundary.', 'constraints.', 'correlation'];
+const DUTY_ROOTS = ['process.', 'boundary.', 'constraints.', 'correlation', 'cases'];
 
 /** Splits server field errors into the duty form's (without `duty.`) and the details'. */
 function splitFields(fields: FieldErrors): { duty: FieldErrors; details: FieldErrors } {
@@ -38,8 +40,30 @@ function newIdempotencyKey(): string {
   return Array.from(crypto.getRandomValues(new Uint8Array(16)), (b) => b.toString(16).padStart(2, '0')).join('');
 }
 
+/** One operating case as the request page edits it (issue 11); an empty quantity keeps the design point's value. */
+export interface CaseRow {
+  name: string;
+  coolantInletTemp: Quantity;
+  coolantFlow: Quantity;
+  processFlow: Quantity;
+}
+
+/** The duty's `cases` from the rows (SI); a value that cannot be read is left to the server's 400. */
+function casesOf(rows: CaseRow[], sink: 'coolant' | 'wall'): OperatingCase[] {
+  const si = (q: Quantity) => (q.value === null ? undefined : quantityToSI(q));
+  return rows.map((r) => {
+    const boundary = sink === 'coolant' ? { inletTemp_C: si(r.coolantInletTemp), massFlow_kg_s: si(r.coolantFlow) } : {};
+    const process = { massFlow_kg_s: si(r.processFlow) };
+    const defined = (o: Record<string, number | undefined>) => Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined));
+    const b = defined(boundary);
+    const p = defined(process);
+    return { name: r.name.trim(), ...(Object.keys(b).length ? { boundary: b } : {}), ...(Object.keys(p).length ? { process: p } : {}) };
+  });
+}
+
 export function useQuoteRequest() {
   const duty = useSizingForm();
+  const cases = ref<CaseRow[]>([]);
   const details = reactive({ quantity: 1 as number | null, needBy: null as string | null, reference: '', notes: '' });
   const checks = useZodForm(detailsSchema, details);
   const uploads = useQuoteUploads();
@@ -76,7 +100,14 @@ export function useQuoteRequest() {
     }
     busy.value = true;
     try {
-      created.value = await createQuote({ ...rest, duty: dutyInput }, idempotencyKey);
+      let withCases = dutyInput;
+      try {
+        if (cases.value.length) withCases = { ...dutyInput, cases: casesOf(cases.value, duty.model.sink) };
+      } catch {
+        failure.value = 'An operating case has a value that cannot be read: check its fields.';
+        return null;
+      }
+      created.value = await createQuote({ ...rest, duty: withCases }, idempotencyKey);
     } catch (error) {
       if (isApiError(error)) applyError(error);
       else failure.value = errorMessage(error);
@@ -88,7 +119,7 @@ export function useQuoteRequest() {
     return created.value;
   }
 
-  return { duty, details, checks, uploads, busy, failure, explanation, created, submit };
+  return { duty, cases, details, checks, uploads, busy, failure, explanation, created, submit };
 }
 
 export type QuoteRequest = ReturnType<typeof useQuoteRequest>;
