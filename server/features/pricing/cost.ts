@@ -91,7 +91,7 @@ export function costFromPriceBook(book: PriceBook): (d: CostInput & TrainFields)
 
   const sundry = (k: 'impingementPlate_minor' | 'uBendPerTube_minor') => s[k] ?? demoPriceBook.sundries[k] ?? 0;
   /** what the design's nozzles and construction add to (or take from) the BEM with nozzles by shell size, per shell */
-  const constructionExtra = (d: CostInput & TrainFields, ds: number, c: ShellCost) => {
+  const constructionExtra = (d: CostInput & TrainFields, c: ShellCost) => {
     let material = 0;
     let labour = 0;
     /** per pair of neighbours: the two spools' flanged ends at the sized nozzles instead of by shell size */
@@ -126,7 +126,7 @@ export function costFromPriceBook(book: PriceBook): (d: CostInput & TrainFields)
     const nShells = shellsOf(d);
     const wall = d.shellWall_m ?? c.wall;
     const shell = c.pipePerMetre === undefined ? rolledShellMass(ds, wall, len) * csPerKg : c.pipePerMetre * len;
-    const extra = constructionExtra(d, ds, c);
+    const extra = constructionExtra(d, c);
     const material =
       d.tubeCount * (d.tubeLength_m + book.tubeCutAllowance_m) * tubeRate +
       2 * c.sheetDiscArea * c.tts * p.sheetRho * p.sheetPerKg +
