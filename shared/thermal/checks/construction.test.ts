@@ -91,3 +91,16 @@ describe('nozzles in the rating and the search', () => {
     expect(inlet.impingementPlate).toBe(true);
   });
 });
+
+describe('the search and the nozzle limit', () => {
+  it('excludes designs whose nozzles would be wider than half the shell and says so', () => {
+    // 60 kg/s of water needs 0.0602 m³/s / 3 m/s → 160 mm → NPS 8 (202.7 mm bore); the largest shell allowed
+    // is NPS 12 (304.8 mm ID, half 152 mm): every design within the other limits is excluded for its nozzles
+    const duty = sizeRequestSchema.parse({
+      process: { fluid: 'oil-vg46', pressure_Pa: 500000, massFlow_kg_s: 2, inletTemp_C: 70, outletTemp_C: 60 },
+      boundary: { kind: 'coolant', fluid: 'water', pressure_Pa: 400000, massFlow_kg_s: 60, inletTemp_C: 25 },
+      constraints: { maxTubeLength_m: 12, maxPressureDrop_Pa: 3e6, maxShellPressureDrop_Pa: 3e6, maxShellInnerDiameter_m: 0.31, processSide: 'tubes' },
+    });
+    expect(() => sizeParsed(duty)).toThrow(/× nozzle/);
+  });
+});
