@@ -11,6 +11,8 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { signedIn, startTestApp, type TestApp } from './support/app';
 import { oilCoolerDuty } from './support/quotes';
+import { demoPriceBook } from '../../server/features/pricing/demo-price-book';
+import { DEFAULT_DESIGN_MARGIN_PCT, designMarginOf } from '../../shared/schemas/price-book';
 
 let t: TestApp;
 let pellmar: Awaited<ReturnType<typeof signedIn>>;
@@ -96,5 +98,20 @@ describe('a quote sized with the price book margin and cases', () => {
     expect(text).toContain('Design point (governing)');
     expect(text).toMatch(/Winter 15 °C/);
     expect(text).toMatch(/Guaranteed process outlet at most 47 °C; predicted [\d.]+ ± [\d.]+ °C; 10 % area margin\./);
+  });
+});
+
+describe('the design margin in the price book', () => {
+  it('a book saved before the field reads the stated default; a margin outside 0–50 % is a 400 naming it, saving nothing', async () => {
+    const { designMargin_pct: _m, ...old } = demoPriceBook as typeof demoPriceBook & { designMargin_pct?: number };
+    void _m;
+    expect(designMarginOf(old)).toBe(DEFAULT_DESIGN_MARGIN_PCT);
+    expect(DEFAULT_DESIGN_MARGIN_PCT).toBe(10);
+    const admin = await signedIn(t.app, 'admin@aldercreek.example');
+    const before = (await admin.get('/api/admin/price-book').expect(200)).body.version as number;
+    const res = await admin.put('/api/admin/price-book').send({ priceBook: { ...demoPriceBook, designMargin_pct: 60 }, baseVersion: before, note: 'margin' });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields).toHaveProperty(['priceBook.designMargin_pct']);
+    expect((await admin.get('/api/admin/price-book')).body.version).toBe(before);
   });
 });
