@@ -105,7 +105,7 @@ describe('the design margin in the price book', () => {
   it('a book saved before the field reads the stated default; a margin outside 0–50 % is a 400 naming it, saving nothing', async () => {
     const { designMargin_pct: _m, ...old } = demoPriceBook as typeof demoPriceBook & { designMargin_pct?: number };
     void _m;
-    expect(designMarginOf(old)).toBe(DEFAULT_DESIGN_MARGIN_PCT);
+    expect(designMarginOf(JSON.parse(JSON.stringify(old)) as { designMargin_pct?: number })).toBe(DEFAULT_DESIGN_MARGIN_PCT);
     expect(DEFAULT_DESIGN_MARGIN_PCT).toBe(10);
     const admin = await signedIn(t.app, 'admin@aldercreek.example');
     const before = (await admin.get('/api/admin/price-book').expect(200)).body.version as number;
