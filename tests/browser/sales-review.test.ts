@@ -38,7 +38,7 @@ async function openFromQueue(page: Page, number: string): Promise<void> {
   await page.locator(sel('geometry-editor')).waitFor();
 }
 
-test('a sales engineer changes the tube material, sees margin and price move, saves and approves; the offer e-mail goes out', async (ctx) => {
+test('a sales engineer changes the tube material, sees the bundle's U and the price move, saves and approves; the offer e-mail goes out', async (ctx) => {
   const quote = await customerRequest(`HPU-${Date.now()}`);
   const page = await openPage(browser(), ctx);
   await signInAs(page, 'sales');
@@ -46,9 +46,14 @@ test('a sales engineer changes the tube material, sees margin and price move, sa
   expect(pathOf(page)).toBe(`/review/${quote.id}`);
   expect(await page.locator(sel('workspace-number')).textContent()).toBe(quote.number);
 
-  const marginBefore = await page.locator(sel('live-margin')).textContent();
+  // stainless conducts about a third as well as carbon steel: the bundle's U falls at once. (The
+  // margin may stay put: the length this bundle needs can sit where one more baffle fits, a step
+  // that a small change of U does not move.)
+  const uBefore = await page.locator(sel('live-u')).textContent();
   await choose(page, 'geo-material', 'Stainless steel 316');
-  await page.waitForFunction((before) => document.querySelector('[data-test="live-margin"]')?.textContent !== before, marginBefore);
+  await page.waitForFunction((before) => document.querySelector('[data-test="live-u"]')?.textContent !== before, uBefore);
+  expect(parseFloat((await page.locator(sel('live-u')).textContent())!)).toBeLessThan(parseFloat(uBefore!));
+  expect(await page.locator(sel('live-margin')).textContent()).toMatch(/^-?\d+\.\d %$/);
   await page.locator(sel('live-price')).waitFor();
   expect(await page.locator(sel('live-price-delta')).textContent()).toMatch(/^\+/);
   expect(await page.locator(sel('live-price-margin')).textContent()).toMatch(/margin/);
