@@ -38,7 +38,7 @@ async function openFromQueue(page: Page, number: string): Promise<void> {
   await page.locator(sel('geometry-editor')).waitFor();
 }
 
-test('a sales engineer changes the tube material, sees the bundle's U and the price move, saves and approves; the offer e-mail goes out', async (ctx) => {
+test('a sales engineer changes the tube material, sees the U of the bundle and the price move, saves and approves; the offer e-mail goes out', async (ctx) => {
   const quote = await customerRequest(`HPU-${Date.now()}`);
   const page = await openPage(browser(), ctx);
   await signInAs(page, 'sales');
