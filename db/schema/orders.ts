@@ -1,4 +1,5 @@
 import { bigint, integer, jsonb, pgEnum, pgSequence, pgTable, text, timestamp, uuid, index } from 'drizzle-orm/pg-core';
+import { orderEventKinds } from '../../shared/schemas/events';
 import { orderStatuses } from '../../shared/schemas/orders';
 import { organizations } from './organizations';
 import { quotes } from './quotes';
@@ -65,7 +66,10 @@ export const orders = pgTable(
   (t) => [index('orders_status_idx').on(t.status, t.updatedAt), index('orders_org_idx').on(t.organizationId)],
 );
 
-/** The order's timeline: who moved it to which step, when, with what note. */
+/**
+ * The order's timeline: who moved it to which step, when, with what note; besides the steps, staff
+ * notes, hold reasons and each side's hydrotest (`kind`; who sees which: shared/schemas/events.ts).
+ */
 export const orderEvents = pgTable(
   'order_events',
   {
@@ -73,6 +77,7 @@ export const orderEvents = pgTable(
     orderId: uuid('order_id').notNull().references(() => orders.id, { onDelete: 'cascade' }),
     actorId: uuid('actor_id').references(() => users.id),
     status: orderStatus('status').notNull(),
+    kind: text('kind', { enum: orderEventKinds }).notNull().default('step'),
     note: text('note'),
     data: jsonb('data'),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
