@@ -281,6 +281,18 @@ export const sizeRequestSchema = z.object({
     .max(OPERATING_CASES_MAX, { error: `Give at most ${OPERATING_CASES_MAX} operating cases.` })
     .optional(),
 }).superRefine((r, ctx) => {
+  // a design point (issue 11) is the most the stream may see: never below its own operating point
+  const designBelow = (design: { pressure_Pa: number; temp_C: number } | undefined, pressure: number, temp: number, path: string[], words: string) => {
+    if (!design) return;
+    if (design.pressure_Pa < pressure - 1e-6) {
+      ctx.addIssue({ code: 'custom', message: `The ${words} design pressure is below its operating pressure: give at least the operating pressure.`, path: [...path, 'design', 'pressure_Pa'] });
+    }
+    if (design.temp_C < temp - 1e-9) {
+      ctx.addIssue({ code: 'custom', message: `The ${words} design temperature is below its inlet temperature ${temp} °C: give at least that.`, path: [...path, 'design', 'temp_C'] });
+    }
+  };
+  designBelow(r.process.design, r.process.pressure_Pa, r.process.inletTemp_C, ['process'], 'process');
+  if (r.boundary.kind === 'coolant') designBelow(r.boundary.design, r.boundary.pressure_Pa, r.boundary.inletTemp_C, ['boundary'], 'coolant');
   const seen = new Set<string>();
   (r.cases ?? []).forEach((c, i) => {
     if (seen.has(c.name.toLowerCase())) ctx.addIssue({ code: 'custom', message: 'Give each operating case its own name.', path: ['cases', i, 'name'] });

@@ -39,6 +39,9 @@ function defaults() {
       inletTemp: quantity('temperature', 72, 'degC'),
       outletTemp: quantity('temperature', 50, 'degC'),
       pressure: quantity('pressure', 3, 'bar', 'gauge'),
+      /** design point for the walls (optional: empty takes the defaults, operating + 10 % and inlet + 25 K) */
+      designPressure: quantity('pressure', null, 'bar', 'gauge'),
+      designTemp: quantity('temperature', null, 'degC'),
     },
     sink: 'coolant' as 'coolant' | 'wall',
     wallTemp: quantity('temperature', 30, 'degC'),
@@ -49,6 +52,8 @@ function defaults() {
       pressure: quantity('pressure', 4, 'bar', 'gauge'),
       foulingInside: quantity('fouling', 0.00009, 'm^2 K/W'),
       foulingOutside: quantity('fouling', 0.00018, 'm^2 K/W'),
+      designPressure: quantity('pressure', null, 'bar', 'gauge'),
+      designTemp: quantity('temperature', null, 'degC'),
     },
     limits: {
       maxTubeLength: quantity('length', 3, 'm'),
@@ -90,6 +95,15 @@ function build(m: SizingModel): Built {
       return undefined;
     }
   };
+  /** a stream's design point: both or neither (neither takes the engine's stated defaults) */
+  const designOf = (pq: Quantity, tq: Quantity, base: string) => {
+    const pressure_Pa = read(pq, `${base}.design.pressure_Pa`, true);
+    const temp_C = read(tq, `${base}.design.temp_C`, true);
+    if (pq.value === null && tq.value === null) return undefined;
+    if (pq.value === null) empties[`${base}.design.pressure_Pa`] = 'Give the design pressure too, or leave both empty for the defaults.';
+    if (tq.value === null) empties[`${base}.design.temp_C`] = 'Give the design temperature too, or leave both empty for the defaults.';
+    return { pressure_Pa, temp_C };
+  };
   const p = m.process;
   const c = p.constant;
   const fluid =
@@ -109,6 +123,7 @@ function build(m: SizingModel): Built {
     massFlow_kg_s: read(p.massFlow, 'process.massFlow_kg_s'),
     inletTemp_C: read(p.inletTemp, 'process.inletTemp_C'),
     outletTemp_C: read(p.outletTemp, 'process.outletTemp_C'),
+    design: designOf(p.designPressure, p.designTemp, 'process'),
   };
   if (p.fluid === 'air-moist') {
     if (p.intake.humidity_pct === null) empties['process.intake.relativeHumidity'] = 'Enter a value.';
@@ -130,6 +145,7 @@ function build(m: SizingModel): Built {
           inletTemp_C: read(k.inletTemp, 'boundary.inletTemp_C'),
           foulingInside_m2K_W: read(k.foulingInside, 'boundary.foulingInside_m2K_W', true),
           foulingOutside_m2K_W: read(k.foulingOutside, 'boundary.foulingOutside_m2K_W', true),
+          design: designOf(k.designPressure, k.designTemp, 'boundary'),
         };
   const l = m.limits;
   const some = <T>(list: T[]): T[] | undefined => (list.length ? [...list] : undefined);

@@ -76,7 +76,7 @@ test('the US toggle converts every field and sizes the same duty', async (ctx) =
   await page.locator(sel('size-it')).click();
   await page.locator(sel('sizing-design')).waitFor();
   expect(await page.locator(sel('design-tube-length')).textContent()).toMatch(/ ft$/);
-  expect(await page.locator(sel('design-outlet')).textContent()).toMatch(/°F$/);
+  expect(await page.locator(sel('design-outlet')).textContent()).toMatch(/^[\d.]+ °F ± [\d.]+ °F /);
 });
 
 test('at phone width the panels stack and the result still shows', async (ctx) => {
@@ -100,4 +100,31 @@ test('the sign-in page leads to the sizing page, whose header offers sign-in, no
   expect(await page.locator(sel('sign-out')).count()).toBe(0);
   await page.locator(sel('header-sign-in')).click();
   await page.locator(sel('sign-in-form')).waitFor();
+});
+
+test('a stated design point sizes the walls: the card shows it with construction, hydrotest, tie rods and nozzles', async (ctx) => {
+  const page = await openPage(browser(), ctx, desktop);
+  await visit(page, '/size');
+  await page.locator(sel('sizing-form')).waitFor();
+  await page.locator(`${sel('process-design-point')} .n-collapse-item__header`).click();
+  await setNumber(page, 'process-design-pressure', 10);
+  // both or neither: a pressure alone is refused at the temperature field
+  await page.locator(sel('size-it')).click();
+  expect(await page.locator(`${sel('process-design-temp-item')} .n-form-item-feedback`).textContent()).toMatch(/design temperature too/);
+  await setNumber(page, 'process-design-temp', 120);
+  await page.locator(sel('size-it')).click();
+  await page.locator(sel('sizing-design')).waitFor();
+
+  // the glycol loop goes in the tubes or on the shell side: its side shows the stated point, the other the default
+  const points = (await page.locator(`${sel('design-point-tube')}, ${sel('design-point-shell')}`).allTextContents()).join(' | ');
+  expect(points).toMatch(/10 bar\(g\) at 120 °C(?! \(default\))/);
+  expect(points).toMatch(/\(default\)/);
+  // UG-99(b): 1.3 × 10 bar(g) × a stress ratio ≥ 1 (memory) on the stated side
+  const hydro = (await page.locator(sel('design-hydrotest')).textContent())!;
+  expect(Math.max(...[...hydro.matchAll(/([\d.]+) bar\(g\)/g)].map((m) => Number(m[1])))).toBeGreaterThanOrEqual(13);
+  expect(await page.locator(sel('design-construction')).textContent()).toMatch(/^(BEM|BEU|AES|AET): .*class [RCB]/);
+  expect(await page.locator(sel('design-tube-wall')).textContent()).toMatch(/needs at least [\d.]+ mm/);
+  expect(await page.locator(sel('design-tie-rods')).textContent()).toMatch(/^\d+ × [\d.]+ mm per shell/);
+  expect(await page.locator(sel('design-nozzles-shell')).textContent()).toMatch(/NPS/);
+  expect(await page.locator(sel('design-outlet')).textContent()).toMatch(/± [\d.]+ K/);
 });

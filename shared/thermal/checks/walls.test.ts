@@ -71,6 +71,16 @@ describe('ASME VIII-1 UG-27(c)(1) thin-cylinder wall (memory)', () => {
     expect(w.findings[0]!.message).toMatch(/no allowable stress/);
   });
 
+  it('a design point below the operating point is refused at its field', () => {
+    const base = water(5, 3);
+    const low = sizeRequestSchema.safeParse({ ...base, process: { ...base.process, design: { pressure_Pa: bar(4), temp_C: 60 } } });
+    expect(low.success).toBe(false);
+    const paths = low.error!.issues.map((i) => i.path.join('.'));
+    expect(paths).toEqual(['process.design.pressure_Pa', 'process.design.temp_C']);
+    const cold = sizeRequestSchema.safeParse({ ...base, boundary: { ...base.boundary, design: { pressure_Pa: bar(3), temp_C: 10 } } });
+    expect(cold.error!.issues.map((i) => i.path.join('.'))).toEqual(['boundary.design.temp_C']);
+  });
+
   it('the shell: a pipe STD wall less 12.5 % must cover the shell side, a rolled shell gets a thicker plate', () => {
     // NPS 24 STD: ID 590.9 mm, wall 9.53 mm; at 30 bar(g), water (c = 1.5 mm), S = 118 MPa (SA-106 B), E = 1:
     // R = 295.47 + 1.5 = 296.97 mm, t = 3.0 × 296.97 / (118 − 1.8) = 7.667 mm, + 1.5 = 9.167 mm > 0.875 × 9.53 = 8.339 mm

@@ -4,6 +4,7 @@ import { correctionMethods } from '@shared/thermal/correlations/methods';
 import { formatQuantity, type QuantityKind, type UnitSystem } from '@shared/thermal/units';
 import { allocationSentence, readDesign, SHELL_METHOD_LABELS, shellsWords } from './design-words';
 import { layoutLabel, lengthLabel, materialName, tubeLabel } from './labels';
+import { constructionFacts } from './construction-facts';
 import { vibrationFacts } from './vibration-words';
 
 export interface Fact {
@@ -72,9 +73,17 @@ export function designFacts(d: Design, system: UnitSystem, duty?: Pick<SizeReque
       facts: [
         { label: 'Duty', value: q(r.duty_W, 'power'), test: 'design-duty' },
         ...optional('of which condensing', r.latentDuty_W, (v) => q(v, 'power')),
-        { label: 'Process outlet', value: q(r.outletTemp_C, 'temperature', 4), test: 'design-outlet' },
+        {
+          label: 'Process outlet',
+          value: `${q(r.outletTemp_C, 'temperature', 4)}${r.outletUncertainty_K !== undefined ? ` ± ${q(r.outletUncertainty_K, 'temperatureDifference', 2)} (the correlations' stated accuracy)` : ''}`,
+          test: 'design-outlet',
+        },
         ...optional('Coolant outlet', r.coolantOutletTemp_C, (v) => q(v, 'temperature', 4), 'design-coolant-outlet'),
-        { label: 'Over-surface margin', value: `${num(d.overSurface_pct, 2)} %`, test: 'design-margin' },
+        {
+          label: 'Over-surface margin',
+          value: `${num(d.overSurface_pct, 2)} %${d.designMargin_pct ? ` (sized with a ${num(d.designMargin_pct, 3)} % design margin on area)` : ''}`,
+          test: 'design-margin',
+        },
         ...optional('Overall U (outside area)', r.overallU_W_m2K, (v) => q(v, 'heatTransferCoefficient')),
         ...optional('LMTD correction F', r.lmtdCorrectionF, (v) => num(v, 3), 'design-f'),
         ...optional('Effectiveness ε / NTU', r.effectiveness, (v) => `${num(v, 3)} / ${num(r.ntu ?? NaN, 3)}`),
@@ -139,5 +148,6 @@ export function designFacts(d: Design, system: UnitSystem, duty?: Pick<SizeReque
           },
         ]),
     ...(r.vibration ? [{ title: 'Tube vibration screen', facts: vibrationFacts(r.vibration, system) }] : []),
+    ...((mechanical) => (mechanical.length ? [{ title: 'Construction and pressure', facts: mechanical }] : []))(constructionFacts(d, system, duty)),
   ];
 }
