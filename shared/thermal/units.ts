@@ -16,6 +16,7 @@
  */
 import { create, createUnitDependencies, unitDependencies } from 'mathjs';
 import type { Unit } from 'mathjs';
+import { formatNumber } from '../format';
 
 const math = create({ unitDependencies, createUnitDependencies });
 math.createUnit('gpm', '1 gal/minute'); // US gallons per minute
@@ -226,7 +227,7 @@ export function fromSI(
   return { value: out, unit: target, label };
 }
 
-/** `fromSI` as text with `digits` significant digits, e.g. "104 °F", "8 bar(g)". */
+/** `fromSI` as text with `digits` significant digits and digit grouping, e.g. "104 °F", "8 bar(g)", "7,937 lb/h". */
 export function formatQuantity(
   value: number,
   kind: QuantityKind,
@@ -234,6 +235,5 @@ export function formatQuantity(
   options: { pressureBasis?: PressureBasis; atmosphere_Pa?: number; digits?: number } = {},
 ): string {
   const d = fromSI(value, kind, system, options);
-  const shown = Number(d.value.toPrecision(options.digits ?? 4)) + 0; // + 0 turns −0 into 0
-  return `${shown} ${d.label}`;
+  return `${formatNumber(d.value, options.digits ?? 4)} ${d.label}`;
 }

@@ -73,7 +73,7 @@ afterAll(() => {
 describe('build-sheet PDF', { timeout: 60000 }, () => {
   it('opens with the order: number, quote, customer, PO, need-by, quantity, status', () => {
     const first = text(1);
-    for (const s of ['Build sheet O-2026-0017', 'Q-2026-0051', 'Harwick Process Cooling', 'HPC-PO-88412', '15 July 2026', '1 unit', 'Released to the shop']) {
+    for (const s of ['Build sheet O-2026-0017', 'Q-2026-0051', 'Harwick Process Cooling', 'HPC-PO-88412', '15 Jul 2026', '1 unit', 'Released to the shop']) {
       expect(first).toContain(s);
     }
   });

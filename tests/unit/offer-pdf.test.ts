@@ -73,7 +73,7 @@ describe('offer PDF', { timeout: 60000 }, () => {
   }, 60000);
 
   it('names the fabricator, the customer, the quote, its revision and dates', () => {
-    for (const s of ['Alder Creek Thermal Works', 'offers@aldercreek-thermal.example', 'Pellmar Compression', 'Jonas Pellmar', 'Offer Q-2026-0042', 'Revision 3 (offer)', '12 March 2026', '11 April 2026', 'PC-75 screw package, aftercooler', '8 weeks']) {
+    for (const s of ['Alder Creek Thermal Works', 'offers@aldercreek-thermal.example', 'Pellmar Compression', 'Jonas Pellmar', 'Offer Q-2026-0042', 'Revision 3 (offer)', '12 Mar 2026', '11 Apr 2026', 'PC-75 screw package, aftercooler', '8 weeks']) {
       expect(si).toContain(s);
     }
   });
@@ -100,7 +100,7 @@ describe('offer PDF', { timeout: 60000 }, () => {
 
   it('shows the summary price: per unit, quantity, the discount line, total, deposit and balance', () => {
     // sums by hand in the fixture: 2 × $6,157.70 − $369.46 = $11,945.94; 30 % deposit $3,583.78
-    for (const s of ['$6,157.70', '$12,315.40', 'Quantity discount, 2 units or more (3 %)', '-$369.46', '$11,945.94', '$3,583.78', '$8,362.16']) {
+    for (const s of ['$6,157.70', '$12,315.40', 'Quantity discount, 2 units or more (3 %)', '-US$369.46', '$11,945.94', '$3,583.78', '$8,362.16']) {
       expect(si).toContain(s);
     }
     expect(si).not.toContain('Tubes, carbon steel 3/4 in BWG 20'); // per-line detail stays out of a summary

@@ -5,6 +5,7 @@
  * before anything is stored: when it is down the buyer gets a 503 (nothing charged) and the quote
  * stays approved, with no acceptance.
  */
+import { poLabel } from '../../../shared/format';
 import type { SessionUser } from '../../../shared/schemas/auth';
 import { acceptQuoteSchema, type AcceptResult } from '../../../shared/schemas/orders';
 import { parse } from '../../lib/validate';
@@ -61,7 +62,7 @@ export async function acceptQuote(deps: OrderDeps, buyer: SessionUser, quoteId: 
       amountMinor: deposit,
       currency: revision.data.price.currency,
     });
-    await quoteRepo.insertEvent(tx, { quoteId, actorId: buyer.id, kind: 'accepted', message: `Accepted with PO ${input.poNumber}; deposit requested.` });
+    await quoteRepo.insertEvent(tx, { quoteId, actorId: buyer.id, kind: 'accepted', message: `Accepted with ${poLabel(input.poNumber)}; deposit requested.` });
   });
   return paymentResult(deps, quoteId, intent.id, intent.client_secret ?? '', deposit, revision.data.price.currency);
 }

@@ -6,6 +6,7 @@
  * between shells, the joint, each side's hydrotest pressure with its basis, an inspection
  * checklist, and the cautions of the domain brief (section 4) on the first page.
  */
+import { formatDate } from '../../../shared/format';
 import type { BuildSheet } from '../../../shared/schemas/build-sheet';
 import { ORDER_STATUS_LABEL, type OrderStatus } from '../../../shared/schemas/orders';
 import { fromSI, STANDARD_ATMOSPHERE_PA } from '../../../shared/thermal/units';
@@ -23,7 +24,6 @@ import { drawFacts, drawTable, factsTable, tableKeepHeight, type TableOptions } 
 import { FABRICATOR } from '../quotes/fabricator';
 
 const LAYOUT_NAMES: Record<number, string> = { 30: '30° triangular', 60: '60° rotated triangular', 90: '90° square', 45: '45° rotated square' };
-const DATE = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
 
 const mm = (v: number) => `${formatNumber(v, 4)} mm`;
 /** A length in whole millimetres, e.g. "2,550 mm" (cut lengths are set out to the millimetre). */
@@ -60,7 +60,7 @@ function drawOpening(doc: PDFKit.PDFDocument, s: BuildSheet): void {
     ['Quote', o.quoteNumber],
     ['Customer', o.customer],
     ['Purchase order', o.poNumber],
-    ['Needed by', o.needBy ? DATE.format(new Date(`${o.needBy.slice(0, 10)}T00:00:00Z`)) : 'not stated'],
+    ['Needed by', o.needBy ? formatDate(o.needBy.slice(0, 10)) : 'not stated'],
     ['Quantity', `${o.quantity} unit${o.quantity === 1 ? '' : 's'}`],
     ['Status', statusName(o.status)],
   ], 9.5);

@@ -2,6 +2,7 @@
  * E-mail about orders: receipts, payment problems, steps the customer should know of, refunds. Each
  * takes the transaction of the change it reports: the message is queued with it or not at all.
  */
+import { poLabel } from '../../../shared/format';
 import { ORDER_STATUS_LABEL, type OrderStatus } from '../../../shared/schemas/orders';
 import { money } from '../quotes/notify';
 import type { Executor } from '../../lib/sql-adapter';
@@ -23,7 +24,7 @@ export async function notifyPaid(deps: OrderDeps, tx: Executor, orderId: string)
     subject: `Receipt: deposit for order ${o.number}`,
     text:
       `Hello ${o.buyerName},\n\nWe received your deposit of ${money(o.depositMinor, o.currency)} for order ${o.number} ` +
-      `(offer ${o.quoteNumber}, PO ${o.poNumber}).\nOrder total ${money(o.totalMinor, o.currency)}; balance due before shipment ` +
+      `(offer ${o.quoteNumber}, ${poLabel(o.poNumber)}).\nOrder total ${money(o.totalMinor, o.currency)}; balance due before shipment ` +
       `${money(balance, o.currency)}.\n\nFollow the order here: ${orderLink(deps, orderId)}${SIGNATURE}`,
   }, tx);
   for (const email of await quoteRepo.staffEmails(tx, 'sales')) {

@@ -1,4 +1,5 @@
 import type { Db } from '../../../db';
+import { formatDateTime } from '../../../shared/format';
 import type { InviteInput, SessionUser } from '../../../shared/schemas/auth';
 import { isStaff } from '../../lib/auth/guards';
 import { newToken } from '../../lib/auth/tokens';
@@ -62,7 +63,7 @@ export async function invite(deps: OrganizationDeps, admin: SessionUser, input: 
         subject: `${admin.name} invites you to Bundlesmith`,
         text:
           `Hello,\n\n${admin.name} of Alder Creek Thermal Works invites you to Bundlesmith as ${input.role} ` +
-          `of ${organization.name}.\nCreate your account here (the link works once, until ${expiresAt.toUTCString()}):\n\n${link}\n`,
+          `of ${organization.name}.\nCreate your account here (the link works once, until ${formatDateTime(expiresAt, { timeZone: 'UTC' })} UTC):\n\n${link}\n`,
       },
       tx,
     );

@@ -3,12 +3,12 @@
  * change it reports: the message is queued in it (transactional outbox), so the change and its
  * e-mail commit together or not at all, and the request never waits for the SMTP server.
  */
+import { formatMoney, plural } from '../../../shared/format';
 import type { Executor } from '../../lib/sql-adapter';
 import type { QuoteDeps } from './deps';
 import * as repo from './repository';
 
-const money = (minor: number, currency: string) =>
-  new Intl.NumberFormat('en-US', { style: 'currency', currency }).format(minor / 100);
+const money = formatMoney;
 
 const link = (deps: QuoteDeps, id: string) => `${deps.config.APP_URL}/quotes/${id}`;
 const SIGNATURE = '\n\nAlder Creek Thermal Works · Bundlesmith';
@@ -35,7 +35,7 @@ export async function notifySubmitted(deps: QuoteDeps, tx: Executor, q: Submitte
         subject: `New request ${q.number} from ${q.organizationName}`,
         text:
           `${q.submittedByName} of ${q.organizationName} asks for a cooler${q.reference ? ` (their reference: ${q.reference})` : ''}: ` +
-          `${q.designSummary} was sized, budget ${money(q.priceTotal_minor, q.currency)} for ${q.quantity} unit(s).\n` +
+          `${q.designSummary} was sized, budget ${money(q.priceTotal_minor, q.currency)} for ${plural(q.quantity, 'unit')}.\n` +
           `Review it within the response target: ${link(deps, q.id)}${SIGNATURE}`,
       },
       tx,

@@ -5,6 +5,7 @@
  * with Kern's h as a second opinion and the J factors), the price as the fabricator chooses to show
  * it, payment, lead time, validity, terms and the engineering cautions of the domain brief.
  */
+import { formatDate } from '../../../shared/format';
 import type { Revision } from '../../../shared/schemas/quotes';
 import { ENGINEERING_CAUTION } from '../../../shared/thermal/exchanger/checks';
 import { drawHeading, drawNoticeBox, drawParagraphs } from '../../lib/pdf/blocks';
@@ -48,11 +49,9 @@ export const OFFER_CAUTIONS = [
 
 const KIND_TITLE: Record<Revision['kind'], string> = { budget: 'Budget offer', draft: 'Draft offer', offer: 'Offer' };
 
-const DATE = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
-
-/** "12 March 2026" from an ISO date or date-time (UTC). */
+/** "12 Mar 2026" from an ISO date or date-time (UTC), as on the pages (shared/format.ts). */
 function longDate(iso: string): string {
-  return DATE.format(new Date(iso.length === 10 ? `${iso}T00:00:00Z` : iso));
+  return formatDate(iso, { timeZone: 'UTC' });
 }
 
 function addressBlock(doc: PDFKit.PDFDocument, x: number, y: number, width: number, title: string, lines: string[], align: 'left' | 'right'): number {

@@ -2,6 +2,7 @@
  * Engineering values for documents, in the reader's unit system: the unit conversion of
  * `shared/thermal/units` with digit grouping ("2,778 lb/h") and sensible precision per kind.
  */
+import { formatNumber } from '../../../shared/format';
 import { fromSI, type PressureBasis, type QuantityKind, type UnitSystem } from '../../../shared/thermal/units';
 
 export interface ShowOptions {
@@ -20,11 +21,8 @@ function numberFormat(key: string, make: () => Intl.NumberFormat): Intl.NumberFo
   return f;
 }
 
-/** A number with grouping and `digits` significant digits, e.g. 171,100 or 0.931. */
-export function formatNumber(value: number, digits = 3): string {
-  const rounded = Number(value.toPrecision(digits)) + 0; // + 0 turns −0 into 0
-  return numberFormat(`s${digits}`, () => new Intl.NumberFormat('en-US', { maximumFractionDigits: 10 })).format(rounded);
-}
+/** A number with grouping and `digits` significant digits, e.g. 171,100 or 0.931 (shared/format.ts). */
+export { formatNumber };
 
 /** `value` (SI, as the engine keeps it) shown in `system`, e.g. "38 °C", "116 psig", "29.8 kPa". */
 export function showQuantity(value: number, kind: QuantityKind, system: UnitSystem, options: ShowOptions = {}): string {

@@ -1,4 +1,5 @@
 /** Tag colours, dates and the tube summary of orders, shared by the staff order pages and the shop board. */
+import { formatDate, plural } from '@shared/format';
 import type { OrderStatus } from '@shared/schemas/orders';
 import type { Design } from '@shared/schemas/thermal';
 import { materialName, tubeLabel } from '../sizing/parts/labels';
@@ -18,9 +19,7 @@ export const ORDER_STATUS_TAG: Record<OrderStatus, 'default' | 'info' | 'success
 
 /** "12 Mar 2026" from a date-only need-by ("2026-03-12"); "—" when none was given. */
 export function formatNeedBy(needBy: string | null): string {
-  if (!needBy) return '—';
-  const date = new Date(`${needBy.slice(0, 10)}T00:00:00`);
-  return Number.isNaN(date.getTime()) ? needBy : date.toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
+  return formatDate(needBy ? needBy.slice(0, 10) : null);
 }
 
 /** Past its need-by date (the whole of that day still counts as on time). */
@@ -32,6 +31,6 @@ export function isOverdue(needBy: string | null, now = new Date()): boolean {
 
 /** "62 × 3/4 in OD, BWG 16 · 2.40 m · Carbon steel · 2 passes": what the shop cuts and tubes. */
 export function tubeSummary(d: Design): string {
-  const passes = `${d.tubePasses} pass${d.tubePasses === 1 ? '' : 'es'}`;
+  const passes = plural(d.tubePasses, 'pass', 'passes');
   return `${d.tubeCount} × ${tubeLabel(d.tubeOuterDiameter_m, d.tubeWallLabel, 'SI')} · ${d.tubeLength_m.toFixed(2)} m · ${materialName(d.tubeMaterial)} · ${passes}`;
 }

@@ -29,24 +29,5 @@ export const REVISION_WORDS: Record<QuoteDetail['revision']['kind'], string> = {
   offer: 'Offer',
 };
 
-const moneyFormats = new Map<string, Intl.NumberFormat>();
-
-/** Integer minor units in the currency's own decimals: 1738884 USD → "US$17,388.84". */
-export function formatMoney(minor: number, currency: string): string {
-  let format = moneyFormats.get(currency);
-  if (!format) {
-    format = new Intl.NumberFormat('en-GB', { style: 'currency', currency });
-    moneyFormats.set(currency, format);
-  }
-  const decimals = format.resolvedOptions().minimumFractionDigits ?? 2;
-  return format.format(minor / 10 ** decimals);
-}
-
-const dateOnly = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium' });
-
-/** "4 Dec 2026"; a bare `2027-03-31` is read as that calendar day, not shifted by the time zone. */
-export function formatDate(value: string | null | undefined): string {
-  if (!value) return '—';
-  const date = /^\d{4}-\d{2}-\d{2}$/.test(value) ? new Date(`${value}T12:00:00`) : new Date(value);
-  return Number.isNaN(date.getTime()) ? value : dateOnly.format(date);
-}
+/** Money and dates as on every page, PDF and e-mail (shared/format.ts). */
+export { formatDate, formatMoney } from '@shared/format';
