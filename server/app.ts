@@ -25,6 +25,7 @@ import { outboxRouter } from './features/outbox/routes';
 import { priceBookRouter } from './features/pricing/routes';
 import { quotesRouter } from './features/quotes/routes';
 import { thermalRouter } from './features/thermal/routes';
+import { exportsRouter } from './features/exports/routes';
 
 export interface AppDeps {
   config: Config;
@@ -86,6 +87,7 @@ export function createApp({
   app.use('/api/fluids', fluidsRouter());
   app.use('/api/thermal', thermalRouter(pool, config));
   app.use('/api/organizations', organizationsRouter(deps));
+  app.use('/api', exportsRouter(orderDeps));
   app.use('/api/quotes', acceptRouter(orderDeps));
   app.use('/api/quotes', quotesRouter(orderDeps));
   app.use('/api/orders', ordersRouter(orderDeps));
