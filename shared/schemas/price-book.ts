@@ -70,7 +70,19 @@ export const DEFAULT_DESIGN_MARGIN_PCT = 10;
 /** The book's design margin, %, or the default for a book saved before the field. */
 export const designMarginOf = (book: Pick<PriceBook, 'designMargin_pct'>): number => book.designMargin_pct ?? DEFAULT_DESIGN_MARGIN_PCT;
 
-export const priceLineGroups = ['material', 'labour', 'overhead', 'margin', 'discount', 'surcharge'] as const;
+export const priceLineGroups = ['material', 'labour', 'overhead', 'margin', 'discount', 'surcharge', 'extra'] as const;
+export type PriceLineGroup = (typeof priceLineGroups)[number];
+
+/** How people read each group of price lines (the workspace's headings). */
+export const PRICE_GROUP_LABEL: Record<PriceLineGroup, string> = {
+  material: 'Material',
+  labour: 'Labour',
+  overhead: 'Overhead',
+  margin: 'Margin',
+  discount: 'Discount',
+  surcharge: 'Surcharge',
+  extra: 'Added by sales (per order)',
+};
 
 /** One priced line; `source` says where the rate came from (price-book entry or an override). */
 export const priceLineSchema = z.object({
@@ -84,6 +96,8 @@ export const priceLineSchema = z.object({
   source: z.string(),
   /** present when a sales engineer overrode the computed amount */
   override: z.object({ computed_minor: z.int(), reason: z.string(), by: z.string() }).optional(),
+  /** present on a line a sales engineer added (group `extra`): why, and who; internal */
+  added: z.object({ kind: z.string(), description: z.string().optional(), reason: z.string(), by: z.string() }).optional(),
 });
 export type PriceLine = z.infer<typeof priceLineSchema>;
 

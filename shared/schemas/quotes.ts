@@ -65,11 +65,39 @@ export const priceOverrideSchema = z.object({
   reason: plainText().trim().min(3, { error: 'Say why the computed price is overridden.' }).max(500),
 });
 
+/** Lines a sales engineer adds to an order beyond the cooler itself (priced once per order, not per unit). */
+export const freeLineKinds = ['freight', 'crating', 'inspection', 'other'] as const;
+export const FREE_LINE_LABEL: Record<(typeof freeLineKinds)[number], string> = {
+  freight: 'Freight',
+  crating: 'Crating',
+  inspection: 'Third-party inspection',
+  other: 'Other',
+};
+/** The most one added line may be, in minor units (1 million in the currency; ours). */
+export const FREE_LINE_MAX_MINOR = 100_000_000;
+
+export const freeLineSchema = z
+  .object({
+    kind: z.enum(freeLineKinds, { error: 'Choose freight, crating, inspection or other.' }),
+    /** what the customer reads after the kind, e.g. "DAP Rotterdam, two pallets"; required for `other` */
+    description: plainText().trim().max(120).optional(),
+    amount_minor: z
+      .int({ error: 'Enter an amount in cents.' })
+      .min(1, { error: 'The amount must be more than 0.' })
+      .max(FREE_LINE_MAX_MINOR, { error: `At most ${FREE_LINE_MAX_MINOR / 100} in the quote's currency.` }),
+    /** internal: why the line is there (a carrier's quote, the customer's request) */
+    reason: plainText().trim().min(3, { error: 'Say why the line is added.' }).max(500),
+  })
+  .refine((l) => l.kind !== 'other' || (l.description ?? '').length > 0, { error: 'Describe an "other" line for the customer.', path: ['description'] });
+export type FreeLine = z.infer<typeof freeLineSchema>;
+
 /** What a sales engineer may change; the same shape previews a change without saving it. */
 export const quoteChangeSchema = z.object({
   duty: sizeRequestSchema.optional(),
   design: designEditSchema.optional(),
   priceOverrides: z.array(priceOverrideSchema).max(50).optional(),
+  /** the added lines; a list given replaces the old one, otherwise the old lines carry over */
+  freeLines: z.array(freeLineSchema).max(10, { error: 'At most 10 added lines.' }).optional(),
   quantity: z.int().min(1).max(500).optional(),
 });
 const notBoth = (p: { duty?: unknown; design?: unknown }) => !(p.duty && p.design);
@@ -115,6 +143,8 @@ export const revisionSchema = z.object({
   leadTimeWeeks: z.int(),
   /** set on an offer: until when it may be accepted */
   validUntil: z.string().optional(),
+  /** set on an offer: the sales engineer's message at approval, printed on the offer and in its e-mail */
+  message: z.string().optional(),
 });
 export type Revision = z.infer<typeof revisionSchema>;
 

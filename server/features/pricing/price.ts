@@ -3,14 +3,15 @@
  * the shop rate), overhead % of (material + labour), margin % of (material + labour + overhead):
  * these lines are PER UNIT and sum to `unit_minor`. Then, per ORDER, on the subtotal unit × quantity:
  * a quantity-break discount line (negative) and an expedite surcharge line when the need-by date is
- * inside the standard lead time. `total_minor` = subtotal + discount + surcharge.
+ * inside the standard lead time; then the lines a sales engineer added (freight, crating, inspection),
+ * per order. `total_minor` = subtotal + discount + surcharge + added lines.
  *
  * Rounding: every line amount is rounded half up to a whole minor unit (cent) on its own
  * (quantity × rate, or % × base); sums are of the rounded line amounts, so the lines always add up.
  * Line quantities (m, kg, m², h) are rounded to 0.01 first (bom.ts) and priced as shown.
  */
 import type { Price, PriceBook, PriceLine } from '../../../shared/schemas/price-book';
-import { OVERRIDE_CAP_MINOR } from '../../../shared/schemas/quotes';
+import { FREE_LINE_LABEL, OVERRIDE_CAP_MINOR, type FreeLine } from '../../../shared/schemas/quotes';
 import { badRequest } from '../../lib/errors';
 import { billOfMaterials, type BomInput, type FlangeClass } from './bom';
 import { roundMinor } from './bom-rules';
@@ -35,6 +36,23 @@ export interface PriceOptions {
   today?: Date;
   overrides?: PriceOverride[];
   flangeClass?: FlangeClass;
+  /** lines a sales engineer added (freight, crating, inspection…): per order, added to the total as given */
+  freeLines?: (FreeLine & { by: string })[];
+}
+
+/** An added line as a price line: "Freight: DAP Rotterdam", one per order, its reason kept internal. */
+export function freeLineToPriceLine(l: FreeLine & { by: string }, i: number): PriceLine {
+  return {
+    key: `extra-${i + 1}`,
+    group: 'extra',
+    description: l.description ? `${FREE_LINE_LABEL[l.kind]}: ${l.description}` : FREE_LINE_LABEL[l.kind],
+    quantity: 1,
+    unit: 'order',
+    rate_minor: l.amount_minor,
+    amount_minor: l.amount_minor,
+    source: `added by ${l.by}`,
+    added: { kind: l.kind, ...(l.description ? { description: l.description } : {}), reason: l.reason, by: l.by },
+  };
 }
 
 /**
@@ -132,6 +150,11 @@ export function priceDesign(design: BomInput, book: PriceBook, bookVersion: numb
     total += pct('expedite', 'surcharge', `Expedite ${book.expedite_pct} %: need-by ${opts.needBy} is inside the ${book.standardLeadTimeWeeks}-week lead time`,
       book.expedite_pct, subtotal, `expedite ${book.expedite_pct} %`);
   }
+  (opts.freeLines ?? []).forEach((l, i) => {
+    const line = freeLineToPriceLine(l, i);
+    lines.push(line);
+    total += line.amount_minor;
+  });
   const unknown = [...overrides.keys()];
   if (unknown.length) throw new PricingError('unknown-price-line', `No price line to override: ${unknown.join(', ')}.`);
   return { currency: book.currency, lines, unit_minor: unit, quantity, total_minor: total, priceBookVersion: bookVersion };

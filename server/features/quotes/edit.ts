@@ -1,6 +1,6 @@
 /** A sales engineer's changes to a quote under review: duty, geometry, quantity, price overrides, notes. */
 import type { SessionUser } from '../../../shared/schemas/auth';
-import type { patchQuoteSchema, Revision } from '../../../shared/schemas/quotes';
+import type { FreeLine, patchQuoteSchema, Revision } from '../../../shared/schemas/quotes';
 import type { Config } from '../../lib/config';
 import { conflict, HttpError } from '../../lib/errors';
 import type { QuoteDeps } from './deps';
@@ -28,8 +28,16 @@ async function computeChange(current: Revision, quantity: number, needBy: string
     : current.price.lines
         .filter((l) => l.override && keys.has(l.key))
         .map((l) => ({ key: l.key, amount_minor: l.amount_minor, reason: l.override!.reason, by: l.override!.by }));
-  const price = overrides.length ? priceWithBook(design, book, { quantity: qty, needBy, overrides }) : base;
+  const freeLines = change.freeLines ? change.freeLines.map((l) => ({ ...l, by: by.name })) : freeLinesOf(current.price);
+  const price = overrides.length || freeLines.length ? priceWithBook(design, book, { quantity: qty, needBy, overrides, freeLines }) : base;
   return { duty, design, alternatives, price, quantity: qty };
+}
+
+/** The added lines of a saved price, as they were entered (they carry over to the next revision). */
+function freeLinesOf(price: Revision['price']) {
+  return price.lines
+    .filter((l) => l.group === 'extra' && l.added)
+    .map(({ amount_minor, added }) => ({ ...added!, kind: added!.kind as FreeLine['kind'], amount_minor }));
 }
 
 function editableOrThrow(status: string) {

@@ -50,10 +50,11 @@ export function toSummary(viewer: SessionUser, row: Row): QuoteSummary {
 
 /**
  * Customers see the price as the fabricator chooses to show it: the cooler per unit, then any
- * discount or surcharge. Cost build-up, overhead, margin and override reasons stay internal.
+ * discount or surcharge and the lines sales added (freight, crating, inspection). Cost build-up, overhead, margin and override reasons stay internal.
  */
 export function customerPrice(price: Revision['price']): Revision['price'] {
-  const hidden = price.lines.filter((l) => l.group !== 'discount' && l.group !== 'surcharge');
+  const shown = (l: PriceLine) => l.group === 'discount' || l.group === 'surcharge' || l.group === 'extra';
+  const hidden = price.lines.filter((l) => !shown(l));
   const perUnit = hidden.reduce((s, l) => s + l.amount_minor, 0);
   const unitLine: PriceLine = {
     key: 'cooler',
@@ -65,7 +66,8 @@ export function customerPrice(price: Revision['price']): Revision['price'] {
     amount_minor: perUnit * price.quantity,
     source: `price book v${price.priceBookVersion}`,
   };
-  const visible = price.lines.filter((l) => l.group === 'discount' || l.group === 'surcharge').map(({ override: _o, ...l }) => l);
+  // added lines (freight, crating, inspection) are shown by their label; why they were added stays internal
+  const visible = price.lines.filter(shown).map(({ override: _o, added: _a, ...l }) => l);
   return { ...price, lines: [unitLine, ...visible] };
 }
 

@@ -3,7 +3,7 @@
  * active price book as the cost function, then price it. Thermal and pricing failures become 422s.
  */
 import type { SessionUser } from '../../../shared/schemas/auth';
-import type { DesignEdit, Revision } from '../../../shared/schemas/quotes';
+import type { DesignEdit, FreeLine, Revision } from '../../../shared/schemas/quotes';
 import type { Design, SizeRequest } from '../../../shared/schemas/thermal';
 import { priceDesign } from '../pricing/price';
 import { getActivePricing } from '../pricing/service';
@@ -39,13 +39,19 @@ export function evaluateWithBook(config: Config, duty: SizeRequest, edit: Design
 export function priceWithBook(
   design: Design,
   book: ActiveBook,
-  opts: { quantity: number; needBy?: string | null; overrides?: { key: string; amount_minor: number; reason: string; by: string }[] },
+  opts: {
+    quantity: number;
+    needBy?: string | null;
+    overrides?: { key: string; amount_minor: number; reason: string; by: string }[];
+    freeLines?: (FreeLine & { by: string })[];
+  },
 ): Revision['price'] {
   // a design the book cannot price throws PricingError, an HttpError 422 naming the missing entry
   return priceDesign(design, book.data, book.version, {
     quantity: opts.quantity,
     ...(opts.needBy ? { needBy: opts.needBy } : {}),
     ...(opts.overrides?.length ? { overrides: opts.overrides } : {}),
+    ...(opts.freeLines?.length ? { freeLines: opts.freeLines } : {}),
   });
 }
 

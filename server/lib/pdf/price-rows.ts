@@ -11,7 +11,8 @@ import type { Row } from './table';
 
 export type PriceDetail = 'summary' | 'detailed';
 
-const isAdjustment = (l: PriceLine) => l.group === 'discount' || l.group === 'surcharge';
+/** per-order lines: the book's discount and surcharge, and the lines sales added (freight, crating…) */
+const isAdjustment = (l: PriceLine) => l.group === 'discount' || l.group === 'surcharge' || l.group === 'extra';
 
 /** Rows `[description, quantity, unit, rate, amount]` of the price table. */
 export function priceRows(price: Price, detail: PriceDetail, unitDescription: string): Row[] {
