@@ -1,4 +1,12 @@
-import { index, integer, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+
+/** A document a message carries, rendered at send time (server/lib/mail.ts). */
+export interface MailAttachmentRef {
+  kind: 'offer-pdf';
+  quoteId: string;
+  revision: number;
+  units?: 'SI' | 'US';
+}
 
 /**
  * Every e-mail the app sends, kept beyond the job queue's archive: written in the same transaction as
@@ -13,6 +21,12 @@ export const mailLog = pgTable(
     subject: text('subject').notNull(),
     text: text('text').notNull(),
     html: text('html'),
+    /**
+     * Files the message carries, named rather than stored (`[{ kind: 'offer-pdf', quoteId, revision }]`):
+     * the mail worker renders each when it sends, from frozen records, so a retry or a resend carries
+     * the same document and the queue never holds large bytes.
+     */
+    attachments: jsonb('attachments').$type<MailAttachmentRef[]>(),
     /** queued → sent, or failed once the queue has given up (retries in between keep it queued) */
     status: text('status', { enum: ['queued', 'sent', 'failed'] }).notNull().default('queued'),
     attempts: integer('attempts').notNull().default(0),
