@@ -6,6 +6,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { seedPriceBook } from '../../db/seed-price-book';
+import { demoPriceBook } from '../../server/features/pricing/demo-price-book';
 import { csvLine, parseCsv } from '../../shared/csv';
 import { client, signedIn, startTestApp, type TestApp } from './support/app';
 
@@ -14,6 +15,12 @@ let t: TestApp;
 beforeAll(async () => {
   t = await startTestApp();
   await seedPriceBook(t.database.db);
+  // start from the demo book's tubes (an earlier run or another file may have saved others)
+  const admin = await signedIn(t.app, 'admin@aldercreek.example');
+  const active = (await admin.get(URL).expect(200)).body;
+  if (JSON.stringify(active.priceBook.tubes) !== JSON.stringify(demoPriceBook.tubes)) {
+    await admin.put(URL).send({ priceBook: { ...active.priceBook, tubes: demoPriceBook.tubes }, baseVersion: active.version, note: 'demo tubes (test)' }).expect(201);
+  }
 });
 afterAll(() => t.close());
 
