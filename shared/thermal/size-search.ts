@@ -96,6 +96,8 @@ export interface SearchState {
   step: number;
   /** design margin on area as a factor, 1 + margin (the price book's `designMargin_pct`); lengths are sized for required × this */
   margin?: number;
+  /** the shortest bundle the shop builds, m (price book `minTubeLength_m`): shorter solved lengths are made this long */
+  minLength?: number;
   costOf: (d: CostInput) => number;
   reasons: Record<Reason, number>;
   evaluated: number;
@@ -296,7 +298,7 @@ function solveCandidate(st: SearchState, ctx: DutyContext, view: SideView | unde
       required = (total * ntus[m]!) / ntus[first]! / n;
     }
   }
-  const length = roundUp(required, step);
+  const length = Math.max(roundUp(required, step), st.minLength ?? 0);
   const out = { ok: false, required: required / margin, length, shells: n, ntu: ntus[n - 1]!, tubeDp: 0, shellDp: 0 };
   if (!(length <= c.maxTubeLength_m + 1e-9)) { st.reasons.length++; return out; }
   if (view && (length / dShell < SHELL_ASPECT[0] || length / dShell > SHELL_ASPECT[1])) { st.reasons['shell-aspect']++; return out; }

@@ -22,6 +22,7 @@ import { SHELL_ASPECT } from './exchanger/shell-side';
 import { bafflePlan, SEARCH_BAFFLE_CUTS } from './geometry/baffles';
 import { designTieRods } from './geometry/layout';
 import { sizeWithCases } from './size-cases';
+import { assertDutyWithinShop, beyondShopShell, shopShellBinds, withinShop, type ShopLimits } from './shop-limits';
 import { dutyContext } from './size-duty';
 import { distinct, distinctKey, spanning } from './size-pick';
 import { rankOf, search, searchShells, type Pre, type Reason, type SearchState } from './size-search';
@@ -35,6 +36,8 @@ export interface SizeOptions {
   maxCandidates?: number;
   /** the fabricator's design margin on area, % (price book `designMargin_pct`); the request may ask for more, never less */
   designMargin_pct?: number;
+  /** the shop's shortest bundle and largest shell (price book, issue 12): a duty below them is refused, no design outside them offered */
+  shop?: ShopLimits;
 }
 
 /** 0.1 m: default length step, a common cut-length increment for tube bundles (common practice). */
@@ -58,6 +61,24 @@ const RELAX: Record<Reason, [string, string]> = {
 
 /** Sizes a parsed request; with operating cases, for the governing one, rating all (size-cases.ts). */
 export function sizeParsed(req: SizeRequest, opts: SizeOptions = {}): SizeResult {
+  if (!opts.shop) return sizeAll(req, opts);
+  assertDutyWithinShop(req, opts.shop);
+  try {
+    return sizeAll(withinShop(req, opts.shop), opts);
+  } catch (err) {
+    if (!(err instanceof ThermalInputError && err.code === 'no-feasible-design' && shopShellBinds(req, opts.shop))) throw err;
+    // nothing within the shop's largest shell: when a larger shell would do, say that the shop's limit is what binds
+    let wider: SizeResult;
+    try {
+      wider = sizeAll(req, opts);
+    } catch {
+      throw err;
+    }
+    throw beyondShopShell(wider.recommended, opts.shop);
+  }
+}
+
+function sizeAll(req: SizeRequest, opts: SizeOptions): SizeResult {
   if (req.cases?.length) {
     return sizeWithCases(req, {
       sizeOne: (r) => sizeOne(r, opts),
@@ -80,6 +101,7 @@ function sizeOne(req: SizeRequest, opts: SizeOptions): SizeResult {
   const marginPct = designMarginOf(req, opts);
   const st: SearchState = {
     req, ctx, step: c.lengthStep_m ?? opts.lengthStep_m ?? DEFAULT_LENGTH_STEP_M, costOf: opts.costOf ?? costProxy, margin: 1 + marginPct / 100,
+    minLength: opts.shop?.minTubeLength_m,
     reasons: { length: 0, 'pressure-drop': 0, 'shell-pressure-drop': 0, 'lmtd-correction': 0, 'shell-size': 0, 'shell-aspect': 0, wall: 0, vibration: 0, nozzle: 0 }, evaluated: 0, pre: [],
   };
   if (searchShells(req).length === 0) {
@@ -158,7 +180,7 @@ function refineCut(st: SearchState, p: Pre): Pre {
       r = next;
       if (settled) break;
     }
-    const length = Math.round(Math.ceil((r.length * (st.margin ?? 1)) / st.step - 1e-9) * st.step * 1e9) / 1e9;
+    const length = Math.max(Math.round(Math.ceil((r.length * (st.margin ?? 1)) / st.step - 1e-9) * st.step * 1e9) / 1e9, st.minLength ?? 0);
     const dp = n * side.dp.total_Pa * (length / r.length);
     if (!(length <= c.maxTubeLength_m + 1e-9) || dp > maxShellDp) continue;
     if (r.length < bestLen - 1e-6 || (Math.abs(r.length - bestLen) <= 1e-6 && dp < bestDp)) {
