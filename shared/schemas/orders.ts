@@ -3,6 +3,7 @@
  * The steps in order; `on-hold` and `cancelled` can interrupt them.
  */
 import { z } from 'zod';
+import { orderEventKindSchema } from './events';
 import { designSchema } from './thermal';
 
 export const orderSteps = ['deposit-paid', 'released', 'cutting', 'tubing', 'shell-and-heads', 'hydrotest', 'ready-to-ship', 'shipped'] as const;
@@ -23,6 +24,24 @@ export const ORDER_STATUS_LABEL: Record<OrderStatus, string> = {
   'on-hold': 'On hold',
   cancelled: 'Cancelled',
 };
+
+/** Steps the customer hears of by e-mail (the others show on their timeline only): the shop confirms before moving an order to one. */
+export const CUSTOMER_EMAIL_STEPS: readonly OrderStatus[] = ['released', 'hydrotest', 'ready-to-ship', 'shipped', 'on-hold', 'cancelled'];
+
+/**
+ * What the customer reads when their order is put on hold: neutral wordings chosen separately from
+ * the reason, which stays with staff.
+ */
+export const HOLD_WORDINGS = {
+  'awaiting-material': 'Waiting for material to arrive; we will tell you when work resumes.',
+  'awaiting-information': 'Waiting for information from you; your sales engineer will be in touch.',
+  'quality-check': 'Held for an additional quality check.',
+  rescheduled: 'Rescheduled in the shop; we will confirm the new date.',
+} as const;
+export const holdWordingSchema = z.enum(Object.keys(HOLD_WORDINGS) as [keyof typeof HOLD_WORDINGS, ...(keyof typeof HOLD_WORDINGS)[]], {
+  error: 'Choose what the customer reads.',
+});
+export type HoldWording = z.infer<typeof holdWordingSchema>;
 
 const text = (max: number) => z.string().trim().min(1, { error: 'Required.' }).max(max);
 
@@ -53,13 +72,48 @@ export const acceptResultSchema = z.object({
 });
 export type AcceptResult = z.infer<typeof acceptResultSchema>;
 
+/**
+ * A move of the shop. `note` is for staff only; `customerNote` is written for the customer (their
+ * timeline and the step's e-mail: a waybill). Putting an order on hold needs `reason` (staff) and
+ * `customerWording` (what the customer reads). Leaving the hydrotest needs both sides recorded passed.
+ */
 export const advanceOrderSchema = z.object({
   to: orderStatusSchema,
   note: z.string().trim().max(2000).optional(),
-  /** the test pressure applied, Pa gauge: required when leaving the hydrotest step */
-  hydrotestPressure_Pa: z.number().positive().max(1e9).optional(),
-  hydrotestPassed: z.boolean().optional(),
+  customerNote: z.string().trim().max(500).optional(),
+  reason: z.string().trim().max(2000).optional(),
+  customerWording: holdWordingSchema.optional(),
 });
+export type AdvanceOrderInput = z.input<typeof advanceOrderSchema>;
+
+export const hydrotestSides = ['tube', 'shell'] as const;
+export type HydrotestSideName = (typeof hydrotestSides)[number];
+
+const hydrotestSideSchema = z.object({
+  /** the test pressure held, Pa gauge */
+  pressure_Pa: z.number({ error: 'Enter the test pressure.' }).positive({ error: 'Enter the test pressure.' }).max(1e9),
+  /** how long the pressure was held, minutes */
+  holdTime_min: z.number({ error: 'Enter the hold time.' }).positive({ error: 'Enter the hold time.' }).max(24 * 60),
+  passed: z.boolean({ error: 'Choose passed or failed.' }),
+});
+
+/** The hydrotest of one or both sides, recorded while the order is at the hydrotest step. */
+export const recordHydrotestSchema = z
+  .object({ tube: hydrotestSideSchema.optional(), shell: hydrotestSideSchema.optional(), note: z.string().trim().max(2000).optional() })
+  .refine((v) => v.tube || v.shell, { error: 'Record the tube side, the shell side or both.', path: ['tube'] });
+export type RecordHydrotestInput = z.input<typeof recordHydrotestSchema>;
+
+/** One side's latest test and the pressure the build sheet asks for (staff). */
+export const hydrotestStateSchema = z.object({
+  sides: z.array(z.object({
+    side: z.enum(hydrotestSides),
+    required_Pa: z.number(),
+    latest: z.object({ pressure_Pa: z.number(), holdTime_min: z.number(), passed: z.boolean(), by: z.string().nullable(), at: z.string() }).nullable(),
+  })),
+  /** both sides' latest tests passed: the order may leave the hydrotest */
+  passed: z.boolean(),
+});
+export type HydrotestState = z.infer<typeof hydrotestStateSchema>;
 
 export const cancelOrderSchema = z.object({
   reason: text(2000),
@@ -77,8 +131,11 @@ export const listOrdersQuerySchema = z.object({
 export type ListOrdersQuery = z.infer<typeof listOrdersQuerySchema>;
 
 export const orderEventSchema = z.object({
+  kind: orderEventKindSchema,
   status: orderStatusSchema,
   note: z.string().nullable(),
+  /** staff only: the hydrotest's hold time and required pressure */
+  detail: z.string().optional(),
   by: z.string().nullable(),
   at: z.string(),
 });
@@ -93,6 +150,8 @@ export const orderSchema = z.object({
   organizationId: z.uuid(),
   organizationName: z.string(),
   status: orderStatusSchema,
+  /** the step an order on hold left (and resumes at) */
+  heldFrom: orderStatusSchema.nullable(),
   poNumber: z.string(),
   needBy: z.string().nullable(),
   total_minor: z.int(),

@@ -150,21 +150,27 @@ describe('orders and the shop', () => {
     for (const staff of [sales, shop, admin]) expect((await staff.get(`/api/orders/${orderId}`)).status).toBe(200);
   });
 
-  it('goes from release to shipped step by step; the hydrotest needs its record; the customer sees the timeline and hears of it', async () => {
+  it('goes from release to shipped step by step; the hydrotest needs both sides passed; the customer sees the timeline and hears of it', async () => {
     const { orderId } = await paidOrder();
     await sales.post(`/api/orders/${orderId}/release`).send({ note: 'Drawings approved' }).expect(200);
     for (const to of ['cutting', 'tubing', 'shell-and-heads', 'hydrotest']) await shop.post(`/api/orders/${orderId}/advance`).send({ to }).expect(200);
     expect((await shop.post(`/api/orders/${orderId}/advance`).send({ to: 'shipped' })).status).toBe(409);
     const noRecord = await shop.post(`/api/orders/${orderId}/advance`).send({ to: 'ready-to-ship' });
-    expect(noRecord.status).toBe(400);
-    expect(noRecord.body.error.fields).toHaveProperty('hydrotestPressure_Pa');
-    expect((await shop.post(`/api/orders/${orderId}/advance`).send({ to: 'ready-to-ship', hydrotestPressure_Pa: 9e5, hydrotestPassed: false })).status).toBe(422);
-    await shop.post(`/api/orders/${orderId}/advance`).send({ to: 'ready-to-ship', hydrotestPressure_Pa: 9e5, hydrotestPassed: true }).expect(200);
-    const shipped = await shop.post(`/api/orders/${orderId}/advance`).send({ to: 'shipped', note: 'Truck 4411' }).expect(200);
+    expect(noRecord.status).toBe(409);
+    expect(noRecord.body.error.code).toBe('hydrotest-not-passed');
+    const sheet = (await shop.get(`/api/orders/${orderId}/build-sheet`).expect(200)).body;
+    const side = (pressure_Pa: number, passed: boolean) => ({ pressure_Pa, holdTime_min: 30, passed });
+    await shop.post(`/api/orders/${orderId}/hydrotest`).send({ tube: side(sheet.hydrotest.tubeSide_Pa, false), shell: side(sheet.hydrotest.shellSide_Pa, true) }).expect(201);
+    expect((await shop.post(`/api/orders/${orderId}/advance`).send({ to: 'ready-to-ship' })).status).toBe(409);
+    await shop.post(`/api/orders/${orderId}/hydrotest`).send({ tube: side(9e5, true) }).expect(201);
+    await shop.post(`/api/orders/${orderId}/advance`).send({ to: 'ready-to-ship' }).expect(200);
+    const shipped = await shop.post(`/api/orders/${orderId}/advance`).send({ to: 'shipped', customerNote: 'Truck 4411' }).expect(200);
     expect(shipped.body.status).toBe('shipped');
     const seen = await pellmar.get(`/api/orders/${orderId}`).expect(200);
-    expect(seen.body.timeline.map((e: { status: string }) => e.status)).toEqual(['deposit-paid', 'released', 'cutting', 'tubing', 'shell-and-heads', 'hydrotest', 'ready-to-ship', 'shipped']);
-    expect(seen.body.timeline.find((e: { status: string }) => e.status === 'ready-to-ship').note).toMatch(/Hydrotest passed at 9\.0 bar\(g\)/);
+    const steps = seen.body.timeline.filter((e: { kind: string }) => e.kind === 'step');
+    expect(steps.map((e: { status: string }) => e.status)).toEqual(['deposit-paid', 'released', 'cutting', 'tubing', 'shell-and-heads', 'hydrotest', 'ready-to-ship', 'shipped']);
+    expect(seen.body.timeline.filter((e: { kind: string }) => e.kind === 'hydrotest-passed').map((e: { note: string }) => e.note)).toContain('Tube side tested at 9.0 bar(g): passed.');
+    expect(steps.at(-1).note).toBe('Truck 4411');
     await waitForMail(h.t.config, 'customer@pellmar.example', new RegExp(`Order ${seen.body.number}: Shipped`));
     await waitForMail(h.t.config, 'customer@pellmar.example', new RegExp(`Receipt: deposit for order ${seen.body.number}`));
   });

@@ -1,6 +1,7 @@
 import { and, asc, count, desc, eq, ilike, or, sql, type SQL } from 'drizzle-orm';
 import type { Db } from '../../../db';
 import { acceptances, orderEvents, orders, organizations, paymentEvents, quotes, users } from '../../../db/schema';
+import type { OrderEventKind } from '../../../shared/schemas/events';
 import type { ListOrdersQuery, OrderStatus } from '../../../shared/schemas/orders';
 
 type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
@@ -81,15 +82,17 @@ export async function listOrders(db: Db, query: ListOrdersQuery, organizationId?
 
 export async function timeline(db: Executor, orderId: string) {
   return db
-    .select({ status: orderEvents.status, note: orderEvents.note, by: users.name, at: orderEvents.createdAt, data: orderEvents.data })
+    .select({ kind: orderEvents.kind, status: orderEvents.status, note: orderEvents.note, by: users.name, at: orderEvents.createdAt, data: orderEvents.data })
     .from(orderEvents)
     .leftJoin(users, eq(users.id, orderEvents.actorId))
     .where(eq(orderEvents.orderId, orderId))
     .orderBy(asc(orderEvents.createdAt));
 }
 
-export async function addEvent(db: Executor, orderId: string, actorId: string | null, status: OrderStatus, note?: string | null, data?: unknown) {
-  await db.insert(orderEvents).values({ orderId, actorId, status, note: note ?? null, data: data ?? null });
+/** One timeline event; `kind` decides who sees it (shared/schemas/events.ts), a step by default. */
+export async function addEvent(db: Executor, orderId: string, actorId: string | null, status: OrderStatus, note?: string | null, data?: unknown, kind: OrderEventKind = 'step') {
+  // the clock, not the transaction's start: a step and its note written together keep their order
+  await db.insert(orderEvents).values({ orderId, actorId, status, kind, note: note ?? null, data: data ?? null, createdAt: sql`clock_timestamp()` });
 }
 
 /** Moves the order from `from` to `to`; false when it was not at `from` any more (a concurrent move). */

@@ -1,6 +1,6 @@
 import { Router, type RequestHandler } from 'express';
 import { z } from 'zod';
-import { advanceOrderSchema, cancelOrderSchema, listOrdersQuerySchema } from '../../../shared/schemas/orders';
+import { advanceOrderSchema, cancelOrderSchema, listOrdersQuerySchema, recordHydrotestSchema } from '../../../shared/schemas/orders';
 import { currentUser, requireRole, requireUser } from '../../lib/auth/guards';
 import { parse } from '../../lib/validate';
 import { acceptQuote } from './accept';
@@ -8,6 +8,7 @@ import type { OrderDeps } from './deps';
 import { buildSheet } from './build-sheet';
 import { renderBuildSheetPdf } from './build-sheet-pdf';
 import { drillingCsv, drillingPattern } from './drilling';
+import { getHydrotest, recordHydrotest } from './hydrotest';
 import { advanceOrder, cancelOrder, getOrder, listOrders, releaseOrder } from './service';
 import { handleEvent, verifyEvent } from './webhook';
 
@@ -39,6 +40,12 @@ export function ordersRouter(deps: OrderDeps): Router {
   r.post('/:id/advance', requireRole('shop', 'admin'), async (req, res) => {
     res.json(await advanceOrder(deps, currentUser(req), id(req), parse(advanceOrderSchema, req.body)));
   });
+  r.get('/:id/hydrotest', requireRole('sales', 'shop', 'admin'), async (req, res) => {
+    res.json(await getHydrotest(deps, currentUser(req), id(req)));
+  });
+  r.post('/:id/hydrotest', requireRole('shop', 'admin'), async (req, res) => {
+    res.status(201).json(await recordHydrotest(deps, currentUser(req), id(req), parse(recordHydrotestSchema, req.body)));
+  });
   r.post('/:id/cancel', requireUser, async (req, res) => {
     const { reason, from } = parse(cancelOrderSchema, req.body);
     res.json(await cancelOrder(deps, currentUser(req), id(req), reason, from));
@@ -48,11 +55,15 @@ export function ordersRouter(deps: OrderDeps): Router {
   });
   r.get('/:id/build-sheet.pdf', requireRole('sales', 'shop', 'admin'), async (req, res) => {
     const sheet = await buildSheet(deps, currentUser(req), id(req));
-    res.type('application/pdf').set('Content-Disposition', `inline; filename="${sheet.order.number}-build-sheet.pdf"`).send(await renderBuildSheetPdf(sheet));
+    // the document is made before any header is set: a failure answers the JSON error, never a file
+    const pdf = await renderBuildSheetPdf(sheet);
+    res.type('application/pdf').set('Content-Disposition', `inline; filename="${sheet.order.number}-build-sheet.pdf"`).send(pdf);
   });
   r.get('/:id/drilling.csv', requireRole('sales', 'shop', 'admin'), async (req, res) => {
     const order = await getOrder(deps, currentUser(req), id(req));
-    res.type('text/csv').set('Content-Disposition', `attachment; filename="${order.number}-drilling.csv"`).send(drillingCsv(drillingPattern(order.design)));
+    // the pattern is made before any header is set: a design that cannot be drilled answers its JSON 422, never a .csv
+    const csv = drillingCsv(drillingPattern(order.design));
+    res.type('text/csv').set('Content-Disposition', `attachment; filename="${order.number}-drilling.csv"`).send(csv);
   });
   return r;
 }

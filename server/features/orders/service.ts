@@ -1,15 +1,18 @@
 /** Orders: who sees which, and the shop's steps from release to shipment. */
 import type { SessionUser } from '../../../shared/schemas/auth';
-import { orderSteps, type ListOrdersQuery, type Order, type OrderStatus } from '../../../shared/schemas/orders';
+import { customerSeesOrderEvent } from '../../../shared/schemas/events';
+import { HOLD_WORDINGS, orderSteps, type ListOrdersQuery, type Order, type OrderStatus } from '../../../shared/schemas/orders';
 import type { advanceOrderSchema } from '../../../shared/schemas/orders';
 import { isStaff } from '../../lib/auth/guards';
-import { forbidden, HttpError, notFound } from '../../lib/errors';
+import { badRequest, forbidden, HttpError, notFound } from '../../lib/errors';
 import type { Executor } from '../../lib/sql-adapter';
 import { getPriceBookVersion } from '../pricing/repository';
 import * as quoteRepo from '../quotes/repository';
 import type { OrderDeps } from './deps';
+import { hydrotestDetail, hydrotestState, SIDE_NAME } from './hydrotest';
 import { notifyStep } from './notify';
 import { queueRefund } from './refunds';
+import { assertReleasable } from './releasable';
 import * as repo from './repository';
 
 export async function loadOrder(deps: OrderDeps, viewer: SessionUser, id: string) {
@@ -21,6 +24,9 @@ export async function loadOrder(deps: OrderDeps, viewer: SessionUser, id: string
 export async function getOrder(deps: OrderDeps, viewer: SessionUser, id: string): Promise<Order> {
   const row = await loadOrder(deps, viewer, id);
   const [revision, events] = await Promise.all([quoteRepo.findRevision(deps.db, row.quoteId, row.revisionNumber), repo.timeline(deps.db, id)]);
+  const staff = isStaff(viewer);
+  // the customer gets only the kinds shared/schemas/events.ts gives them
+  const seen = staff ? events : events.filter((e) => customerSeesOrderEvent(e.kind));
   return {
     id: row.id,
     number: row.number,
@@ -30,6 +36,7 @@ export async function getOrder(deps: OrderDeps, viewer: SessionUser, id: string)
     organizationId: row.organizationId,
     organizationName: row.organizationName,
     status: row.status,
+    heldFrom: row.heldFrom,
     poNumber: row.poNumber,
     needBy: row.needBy,
     total_minor: row.totalMinor,
@@ -38,7 +45,10 @@ export async function getOrder(deps: OrderDeps, viewer: SessionUser, id: string)
     currency: row.currency,
     design: revision!.data.design,
     quantity: revision!.data.price.quantity,
-    timeline: events.map((e) => ({ status: e.status, note: e.note, by: e.by, at: new Date(e.at).toISOString() })),
+    timeline: seen.map((e) => {
+      const detail = staff && e.kind.startsWith('hydrotest-') ? hydrotestDetail(e.data) : undefined;
+      return { kind: e.kind, status: e.status, note: e.note, by: e.by, at: new Date(e.at).toISOString(), ...(detail ? { detail } : {}) };
+    }),
     createdAt: new Date(row.createdAt).toISOString(),
     updatedAt: new Date(row.updatedAt).toISOString(),
   };
@@ -58,20 +68,25 @@ export async function listOrders(deps: OrderDeps, viewer: SessionUser, query: Li
   };
 }
 
+/** What a move writes besides the step: the step's note is the customer's; staff notes are their own events. */
+type MoveNotes = { customer?: string | null; staff?: { kind: 'note' | 'hold-reason'; text: string }[] };
+
 /**
- * Moves the order on in one transaction with its timeline event and its e-mail (and `then`, e.g. a
+ * Moves the order on in one transaction with its timeline events and its e-mail (and `then`, e.g. a
  * refund job); the update is conditional on `from`, so of two concurrent moves exactly one wins and
- * the other gets 409 with nothing written.
+ * the other gets 409 with nothing written. Only `notes.customer` reaches the customer's timeline and
+ * e-mail; staff notes are events of kinds the customer never sees.
  */
 async function move(
-  deps: OrderDeps, user: SessionUser, id: string, from: OrderStatus, to: OrderStatus, note?: string | null,
+  deps: OrderDeps, user: SessionUser, id: string, from: OrderStatus, to: OrderStatus, notes: MoveNotes = {},
   extra: Partial<typeof repo.orders.$inferInsert> = {}, then?: (tx: Executor) => Promise<void>,
 ) {
   await deps.db.transaction(async (tx) => {
     const ok = await repo.moveOrder(tx, id, from, { status: to, ...extra });
     if (!ok) throw new HttpError(409, 'stale-status', 'The order moved on meanwhile; reload it.');
-    await repo.addEvent(tx, id, user.id, to, note ?? null);
-    await notifyStep(deps, tx, id, to, note);
+    await repo.addEvent(tx, id, user.id, to, notes.customer ?? null);
+    for (const n of notes.staff ?? []) if (n.text) await repo.addEvent(tx, id, user.id, to, n.text, null, n.kind);
+    await notifyStep(deps, tx, id, to, notes.customer);
     await then?.(tx);
   });
   return getOrder(deps, user, id);
@@ -81,41 +96,49 @@ async function move(
 export async function releaseOrder(deps: OrderDeps, user: SessionUser, id: string, note?: string) {
   const row = await loadOrder(deps, user, id);
   if (row.status !== 'deposit-paid') throw new HttpError(409, 'wrong-status', `Only an order with its deposit paid can be released; this one is ${row.status}.`);
-  return move(deps, user, id, 'deposit-paid', 'released', note);
+  await assertReleasable(deps, user, id);
+  return move(deps, user, id, 'deposit-paid', 'released', { staff: note ? [{ kind: 'note', text: note }] : [] });
 }
 
 type Advance = ReturnType<typeof advanceOrderSchema.parse>;
 
 /**
- * The shop moves an order one step on (or on hold, and back). Leaving the hydrotest needs the test
- * pressure and a pass; a failed test keeps the order at the hydrotest.
+ * The shop moves an order one step on (or on hold, and back). On hold needs a reason (staff) and the
+ * wording the customer reads. Leaving the hydrotest needs the latest test of both sides passed
+ * (hydrotest.ts); a failed side keeps the order at the hydrotest.
  */
 export async function advanceOrder(deps: OrderDeps, user: SessionUser, id: string, input: Advance) {
   const row = await loadOrder(deps, user, id);
   const from = row.status;
+  const notes: MoveNotes = { customer: input.customerNote, staff: input.note ? [{ kind: 'note', text: input.note }] : [] };
   if (from === 'on-hold') {
     if (input.to !== row.heldFrom) throw new HttpError(409, 'wrong-step', `An order on hold resumes at the step it left: ${row.heldFrom}.`);
-    return move(deps, user, id, from, input.to, input.note, { heldFrom: null });
+    return move(deps, user, id, from, input.to, notes, { heldFrom: null });
   }
   const at = orderSteps.indexOf(from as (typeof orderSteps)[number]);
   if (at < orderSteps.indexOf('released') || from === 'shipped') {
     throw new HttpError(409, 'wrong-status', `The shop moves orders from release to shipment; this one is ${from}.`);
   }
-  if (input.to === 'on-hold') return move(deps, user, id, from, 'on-hold', input.note, { heldFrom: from });
+  if (input.to === 'on-hold') {
+    const fields: Record<string, string> = {};
+    if (!input.reason) fields.reason = 'Say why the order is on hold (staff read it).';
+    if (!input.customerWording) fields.customerWording = 'Choose what the customer reads.';
+    if (Object.keys(fields).length) throw badRequest('Putting an order on hold needs a reason and the wording the customer reads.', fields);
+    notes.customer = HOLD_WORDINGS[input.customerWording!];
+    notes.staff = [{ kind: 'hold-reason', text: input.reason! }, ...notes.staff!];
+    return move(deps, user, id, from, 'on-hold', notes, { heldFrom: from });
+  }
   const next = orderSteps[at + 1];
   if (input.to !== next) throw new HttpError(409, 'wrong-step', `The next step after ${from} is ${next}, not ${input.to}.`);
   if (from === 'hydrotest') {
-    if (input.hydrotestPressure_Pa === undefined || input.hydrotestPassed === undefined) {
-      throw new HttpError(400, 'invalid-input', 'Record the hydrotest: the test pressure and whether it passed.', {
-        hydrotestPressure_Pa: 'required to leave the hydrotest',
-        hydrotestPassed: 'required to leave the hydrotest',
-      });
+    const test = await hydrotestState(deps, deps.db, row);
+    if (!test.passed) {
+      const open = test.sides.filter((s) => !s.latest?.passed);
+      const fields = Object.fromEntries(open.map((s) => [s.side, s.latest ? 'its latest test failed: repair, then test again' : 'not tested yet']));
+      throw new HttpError(409, 'hydrotest-not-passed', `The order stays at the hydrotest until both sides pass: ${open.map((s) => `${SIDE_NAME[s.side].toLowerCase()} ${fields[s.side]}`).join('; ')}.`, fields);
     }
-    if (!input.hydrotestPassed) throw new HttpError(422, 'hydrotest-failed', 'A failed hydrotest keeps the order at the hydrotest: repair, then test again.');
-    const note = `Hydrotest passed at ${(input.hydrotestPressure_Pa / 1e5).toFixed(1)} bar(g).${input.note ? ` ${input.note}` : ''}`;
-    return move(deps, user, id, from, next, note, { hydrotestPressurePa: Math.round(input.hydrotestPressure_Pa) });
   }
-  return move(deps, user, id, from, next!, input.note);
+  return move(deps, user, id, from, next!, notes);
 }
 
 const BEFORE_FABRICATION: OrderStatus[] = ['deposit-paid', 'released'];
@@ -143,7 +166,7 @@ export async function cancelOrder(deps: OrderDeps, user: SessionUser, id: string
   if (refund > 0 && !jobs) throw new Error('cancelOrder: no job queue to request the refund from');
   const note = `Cancelled: ${reason} Refund ${refund} of ${row.depositMinor} (minor units)${fee ? `, cancellation fee ${fee}` : ''}.`;
   // decided from `row`; the move is conditional on row.status, so the decision holds when it commits
-  return move(deps, user, id, row.status, 'cancelled', note, { heldFrom: null, refundDueMinor: refund, refundStatus: refund > 0 ? 'pending' : 'none' }, async (tx) => {
+  return move(deps, user, id, row.status, 'cancelled', { customer: note }, { heldFrom: null, refundDueMinor: refund, refundStatus: refund > 0 ? 'pending' : 'none' }, async (tx) => {
     if (refund > 0) await queueRefund(jobs!, tx, id);
   });
 }

@@ -2,6 +2,7 @@ import { and, asc, count, desc, eq, ilike, or, sql, type SQL } from 'drizzle-orm
 import { alias } from 'drizzle-orm/pg-core';
 import type { Db } from '../../../db';
 import { acceptances, attachments, orders, organizations, quoteEvents, quoteRevisions, quotes, users } from '../../../db/schema';
+import { customerSeesQuoteEvent, type QuoteEventKind } from '../../../shared/schemas/events';
 import type { ListQuotesQuery, Revision } from '../../../shared/schemas/quotes';
 
 export type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
@@ -182,15 +183,22 @@ export async function latestOfferRevision(db: Executor, quoteId: string) {
   return row?.number;
 }
 
+/**
+ * One quote event. Its kind decides who sees it (shared/schemas/events.ts) and sets `internal`; a
+ * caller's `internal` that disagrees with the kind's audience is a bug and throws.
+ */
 export async function insertEvent(
   db: Executor,
-  values: { quoteId: string; actorId: string | null; kind: string; message?: string | null; internal?: boolean; data?: unknown },
+  values: { quoteId: string; actorId: string | null; kind: QuoteEventKind; message?: string | null; internal?: boolean; data?: unknown },
 ) {
-  await db.insert(quoteEvents).values({ ...values, message: values.message ?? null, internal: values.internal ?? false });
+  const internal = !customerSeesQuoteEvent(values.kind);
+  if (values.internal !== undefined && values.internal !== internal) throw new Error(`insertEvent: a '${values.kind}' event is ${internal ? 'internal' : 'customer-visible'} (shared/schemas/events.ts)`);
+  await db.insert(quoteEvents).values({ ...values, message: values.message ?? null, internal });
 }
 
-export async function listEvents(db: Executor, quoteId: string, includeInternal: boolean) {
-  const where = includeInternal ? eq(quoteEvents.quoteId, quoteId) : and(eq(quoteEvents.quoteId, quoteId), eq(quoteEvents.internal, false));
+/** Every event of the quote, oldest first: the service keeps what the viewer may see. */
+export async function listEvents(db: Executor, quoteId: string) {
+  const where = eq(quoteEvents.quoteId, quoteId);
   return db
     .select({
       id: quoteEvents.id,

@@ -1,4 +1,5 @@
 import type { SessionUser } from '../../../shared/schemas/auth';
+import { customerSeesQuoteEvent } from '../../../shared/schemas/events';
 import type { CreateQuoteInput, ListQuotesQuery, QuoteDetail } from '../../../shared/schemas/quotes';
 import { createQuoteSchema } from '../../../shared/schemas/quotes';
 import { isStaff } from '../../lib/auth/guards';
@@ -101,10 +102,12 @@ export async function getQuote(deps: QuoteDeps, viewer: SessionUser, id: string,
   const [revisions, attachments, events, payment] = await Promise.all([
     repo.listRevisions(deps.db, id),
     repo.listAttachments(deps.db, id),
-    repo.listEvents(deps.db, id, staff),
+    repo.listEvents(deps.db, id),
     repo.paymentState(deps.db, id),
   ]);
-  return toDetail(viewer, row, rev.data, { revisions, attachments, events, ...payment });
+  // a customer gets only the kinds shared/schemas/events.ts gives them
+  const seen = staff ? events : events.filter((e) => customerSeesQuoteEvent(e.kind));
+  return toDetail(viewer, row, rev.data, { revisions, attachments, events: seen, ...payment });
 }
 
 async function customerRevisionNumber(deps: QuoteDeps, id: string, current: number): Promise<number> {
