@@ -5,7 +5,7 @@
  * book's data, once per book version.
  */
 import type { MessagePort } from 'node:worker_threads';
-import { designMarginOf, type PriceBook } from '../../shared/schemas/price-book';
+import { designMarginOf, shopLimitsOf, type PriceBook } from '../../shared/schemas/price-book';
 import type { DesignEdit } from '../../shared/schemas/quotes';
 import type { RateRequest, SizeRequest } from '../../shared/schemas/thermal';
 import type { CostInput } from '../../shared/thermal/cost-proxy';
@@ -53,7 +53,7 @@ function compute(task: ThermalTask): unknown {
       return rateDesign(task.request);
     case 'size':
       return sizeCooler(task.request, {
-        ...(task.book ? { costOf: costOf(task.book), designMargin_pct: designMarginOf(task.book.data) } : {}),
+        ...(task.book ? { costOf: costOf(task.book), designMargin_pct: designMarginOf(task.book.data), shop: shopLimitsOf(task.book.data) } : {}),
         ...(task.maxCandidates ? { maxCandidates: task.maxCandidates } : {}),
       });
     case 'evaluate':

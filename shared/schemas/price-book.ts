@@ -48,6 +48,17 @@ export const priceBookSchema = z.object({
    * reads DEFAULT_DESIGN_MARGIN_PCT.
    */
   designMargin_pct: z.number().min(0, { error: 'The design margin must be between 0 and 50 %.' }).max(50, { error: 'The design margin must be between 0 and 50 %.' }).optional(),
+  /**
+   * issue 12: the shortest tube bundle (tube length per shell) the shop builds, m. Sizing never
+   * offers a shorter one and a duty whose maximum length is below it is refused. Optional: a book
+   * saved before it reads DEFAULT_MIN_TUBE_LENGTH_M.
+   */
+  minTubeLength_m: z.number().min(0.3, { error: 'The shortest bundle must be between 0.3 and 6 m.' }).max(6, { error: 'The shortest bundle must be between 0.3 and 6 m.' }).optional(),
+  /**
+   * issue 12: the largest shell inside diameter the shop builds, m. Optional: a book saved before it
+   * reads the largest shell its heads table prices.
+   */
+  maxShellInnerDiameter_m: z.number().min(0.1, { error: 'The largest shell must be between 0.1 and 3 m.' }).max(3, { error: 'The largest shell must be between 0.1 and 3 m.' }).optional(),
   /** discount on the whole price from this many units up */
   quantityBreaks: z.array(z.object({ minQuantity: z.int().min(2), discount_pct: pct })),
   /** surcharge when the need-by date is inside the standard lead time */
@@ -69,6 +80,20 @@ export const DEFAULT_DESIGN_MARGIN_PCT = 10;
 
 /** The book's design margin, %, or the default for a book saved before the field. */
 export const designMarginOf = (book: Pick<PriceBook, 'designMargin_pct'>): number => book.designMargin_pct ?? DEFAULT_DESIGN_MARGIN_PCT;
+
+/** 1.0 m: the shortest bundle when the book states none (common practice: shorter bundles cost nearly as much to build). */
+export const DEFAULT_MIN_TUBE_LENGTH_M = 1.0;
+
+/**
+ * The shop's limits (issue 12): the book's, or the defaults for a book saved before them: 1.0 m,
+ * and the largest shell its heads table prices (a larger shell could not be priced anyway).
+ */
+export function shopLimitsOf(book: Pick<PriceBook, 'minTubeLength_m' | 'maxShellInnerDiameter_m' | 'heads'>): { minTubeLength_m: number; maxShellInnerDiameter_m: number } {
+  return {
+    minTubeLength_m: book.minTubeLength_m ?? DEFAULT_MIN_TUBE_LENGTH_M,
+    maxShellInnerDiameter_m: book.maxShellInnerDiameter_m ?? Math.max(...book.heads.map((h) => h.maxShellDiameter_m)),
+  };
+}
 
 export const priceLineGroups = ['material', 'labour', 'overhead', 'margin', 'discount', 'surcharge', 'extra'] as const;
 export type PriceLineGroup = (typeof priceLineGroups)[number];

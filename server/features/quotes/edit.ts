@@ -5,6 +5,7 @@ import type { Config } from '../../lib/config';
 import { conflict, HttpError } from '../../lib/errors';
 import type { QuoteDeps } from './deps';
 import { activeBook, buildRevision, evaluateWithBook, priceWithBook, sizeWithBook, type ActiveBook } from './pricing-port';
+import { assertBuildable, hardFindingsWithBook } from './buildable';
 import { designSummary } from './present';
 import * as repo from './repository';
 import { getQuote, loadVisible } from './service';
@@ -57,6 +58,8 @@ export async function patchQuote(deps: QuoteDeps, user: SessionUser, id: string,
   const current = (await repo.findRevision(deps.db, id, row.currentRevision))!;
   const book = await activeBook(deps);
   const next = changed ? await computeChange(current.data, row.quantity, row.needBy, change, book, user, deps.config) : undefined;
+  // a design that cannot be built as it stands is never saved (issue 12): 422 naming the hard findings
+  if (next) assertBuildable(next.design, book.data, 'saved as a revision');
 
   await deps.db.transaction(async (tx) => {
     if (!next) {
@@ -86,6 +89,7 @@ export async function patchQuote(deps: QuoteDeps, user: SessionUser, id: string,
 export async function previewChange(deps: QuoteDeps, user: SessionUser, id: string, change: Change) {
   const row = await loadVisible(deps, user, id);
   const current = (await repo.findRevision(deps.db, id, row.currentRevision))!;
-  const next = await computeChange(current.data, row.quantity, row.needBy, change, await activeBook(deps), user, deps.config);
-  return { design: next.design, price: next.price, alternatives: next.alternatives.map(({ rating: _r, ...a }) => a) };
+  const book = await activeBook(deps);
+  const next = await computeChange(current.data, row.quantity, row.needBy, change, book, user, deps.config);
+  return { design: next.design, price: next.price, alternatives: next.alternatives.map(({ rating: _r, ...a }) => a), hardFindings: hardFindingsWithBook(next.design, book.data) };
 }

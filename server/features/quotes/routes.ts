@@ -11,6 +11,7 @@ import {
 import { currentUser, requireRole, requireUser } from '../../lib/auth/guards';
 import { parse } from '../../lib/validate';
 import { addAttachment, readAttachment } from './attachments';
+import { shopLimits } from './buildable';
 import type { QuoteDeps } from './deps';
 import { patchQuote, previewChange } from './edit';
 import { offerPdf } from './offer';
@@ -44,6 +45,10 @@ export function quotesRouter(deps: QuoteDeps): Router {
   });
   r.get('/', requireUser, async (req, res) => {
     res.json(await listQuotes(deps, currentUser(req), parse(listQuotesQuerySchema, req.query, 'query')));
+  });
+  // the shop's limits from the active price book (issue 12): the workspace marks a design outside them as unbuildable
+  r.get('/shop-limits', sales, async (_req, res) => {
+    res.json(await shopLimits(deps));
   });
   r.get('/:id', requireUser, async (req, res) => {
     const { revision } = parse(revisionQuery, req.query, 'query');

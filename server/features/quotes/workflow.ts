@@ -6,6 +6,7 @@ import { assertChargeable, depositMinor } from '../../lib/payments';
 import { getPriceBookVersion } from '../pricing/repository';
 import type { QuoteDeps } from './deps';
 import { money, notifyCustomer, notifySales } from './notify';
+import { assertBuildable } from './buildable';
 import { activeBook } from './pricing-port';
 import * as repo from './repository';
 import { getQuote, loadVisible } from './service';
@@ -35,6 +36,8 @@ export async function approve(deps: QuoteDeps, user: SessionUser, id: string, in
   requireStatus(row.status, OPEN, 'approved');
   const current = await repo.findRevision(deps.db, id, row.currentRevision);
   const book = await activeBook(deps);
+  // an offer is only made for a design that can be built as it stands (issue 12)
+  assertBuildable(current!.data.design, book.data, 'approved');
   // the buyer must be able to pay the offer's deposit: at least the payment service's minimum charge
   const { deposit_pct } = await getPriceBookVersion(deps.db, current!.priceBookVersion);
   assertChargeable(depositMinor(current!.data.price.total_minor, deposit_pct), current!.data.price.currency);
