@@ -10,6 +10,7 @@ import { z } from 'zod';
 import { correlationChoices } from '../thermal/correlations/select';
 import { fluidIds, unknownFluidProblem } from '../thermal/fluids/registry';
 import { tubeMaterialIds } from '../thermal/geometry/materials';
+import { FLOW_FIELDS } from '../thermal/flow-units';
 
 const num = z.number();
 
@@ -37,6 +38,8 @@ export const LIMITS = {
   temp_C: [-100, 600],
   /** kg/s, magnitude (zero and negative flows reach the engine, which explains them with a 422) */
   massFlow_kg_s: [-1000, 1000],
+  /** m³/s, magnitude, at the inlet state or at the normal/standard reference (the mass flow it makes is held to the kg/s range) */
+  volumeFlow_m3_s: [-1000, 1000],
   /** m: the catalogue's shells run 0.10 to 1.5 m; larger rolled shells to 2.5 m may be rated */
   shellInnerDiameter_m: [0.05, 2.5],
   /** m: the catalogue has 3/8 in (9.5 mm) to 1 1/4 in tubes; 5 to 100 mm accepted */
@@ -63,6 +66,44 @@ const L = LIMITS;
 const pressure = (what: string) => within(what, L.pressure_Pa[0], L.pressure_Pa[1], 'Pa (absolute)');
 const temperature = (what: string) => within(what, L.temp_C[0], L.temp_C[1], '°C');
 const massFlow = (what: string) => within(what, L.massFlow_kg_s[0], L.massFlow_kg_s[1], 'kg/s');
+const volumeFlow = (what: string) => within(what, L.volumeFlow_m3_s[0], L.volumeFlow_m3_s[1], 'm³/s');
+export const standardReferenceSchema = z.enum(['normal', 'standard'], { error: 'The standard reference must be "normal" (0 °C, 101.325 kPa) or "standard" (60 °F, 14.696 psia).' });
+
+/**
+ * A stream's flow (issue 12): exactly one of a mass flow, a volume flow at the stream's inlet state,
+ * or a normal/standard volume flow with its reference (shared/thermal/flow-units.ts); the engine turns
+ * it into kg/s (shared/thermal/flow-basis.ts). The exactly-one rule is `flowIssues`, applied by the
+ * request schemas (a refined object could no longer be extended).
+ */
+function flowShape(what: string) {
+  return {
+    massFlow_kg_s: massFlow(`${what} mass flow`).optional(),
+    volumeFlow_m3_s: volumeFlow(`${what} volume flow`).optional(),
+    standardVolumeFlow_m3_s: volumeFlow(`${what} standard volume flow`).optional(),
+    standardReference: standardReferenceSchema.optional(),
+  };
+}
+
+type FlowGiven = { massFlow_kg_s?: number; volumeFlow_m3_s?: number; standardVolumeFlow_m3_s?: number; standardReference?: string };
+
+/** Issues of one stream's flow: none or two given (`required`), a reference without its flow or the reverse. */
+export function flowIssues(s: FlowGiven, path: (string | number)[], required: boolean): { message: string; path: (string | number)[] }[] {
+  const fields = Object.values(FLOW_FIELDS);
+  const given = fields.filter((f) => s[f] !== undefined);
+  const out: { message: string; path: (string | number)[] }[] = [];
+  const names = 'massFlow_kg_s, volumeFlow_m3_s or standardVolumeFlow_m3_s';
+  if (given.length === 0 && required) out.push({ message: `Give the flow: exactly one of ${names}.`, path: [...path, 'massFlow_kg_s'] });
+  for (const extra of given.slice(1)) {
+    out.push({ message: `Give only one flow: ${given[0]} is already given, so leave out ${extra} (exactly one of ${names}).`, path: [...path, extra] });
+  }
+  if (s.standardVolumeFlow_m3_s !== undefined && s.standardReference === undefined) {
+    out.push({ message: 'Say which reference the standard volume flow is at: "normal" (0 °C, 101.325 kPa) or "standard" (60 °F, 14.696 psia).', path: [...path, 'standardReference'] });
+  }
+  if (s.standardReference !== undefined && s.standardVolumeFlow_m3_s === undefined) {
+    out.push({ message: 'A standard reference belongs to standardVolumeFlow_m3_s: give that flow, or leave the reference out.', path: [...path, 'standardReference'] });
+  }
+  return out;
+}
 const fouling = (what: string) => within(what, L.fouling_m2K_W[0], L.fouling_m2K_W[1], 'm²K/W');
 const pressureDrop = (what: string) => within(what, L.pressureDrop_Pa[0], L.pressureDrop_Pa[1], 'Pa', { exclusiveMin: true });
 const shellDiameter = (what: string) => within(what, L.shellInnerDiameter_m[0], L.shellInnerDiameter_m[1], 'm');
@@ -125,7 +166,7 @@ export const designPointSchema = z.object({
 export const processStreamSchema = z.object({
   fluid: fluidRefSchema,
   pressure_Pa: pressure('Process pressure'),
-  massFlow_kg_s: massFlow('Process mass flow'),
+  ...flowShape('Process'),
   inletTemp_C: temperature('Process inlet temperature'),
   intake: intakeSchema.optional(),
   design: designPointSchema.optional(),
@@ -139,7 +180,7 @@ export const coolantBoundarySchema = z.object({
   kind: z.literal('coolant'),
   fluid: fluidRefSchema,
   pressure_Pa: pressure('Coolant pressure'),
-  massFlow_kg_s: massFlow('Coolant mass flow'),
+  ...flowShape('Coolant'),
   inletTemp_C: temperature('Coolant inlet temperature'),
   shellInnerDiameter_m: shellDiameter('Shell inner diameter').optional(),
   baffleSpacing_m: within('Baffle spacing', L.baffleSpacing_m[0], L.baffleSpacing_m[1], 'm').optional(),
@@ -201,6 +242,12 @@ export const geometrySchema = z
 
 export const correlationSchema = z.enum(correlationChoices).default('auto');
 
+/** Every stream of a request gives exactly one flow (issue 12). */
+function requireFlows(r: { process: FlowGiven; boundary: FlowGiven & { kind: string } }, ctx: z.RefinementCtx): void {
+  for (const issue of flowIssues(r.process, ['process'], true)) ctx.addIssue({ code: 'custom', ...issue });
+  if (r.boundary.kind === 'coolant') for (const issue of flowIssues(r.boundary, ['boundary'], true)) ctx.addIssue({ code: 'custom', ...issue });
+}
+
 export const rateRequestSchema = z.object({
   process: processStreamSchema,
   boundary: boundarySchema,
@@ -208,7 +255,7 @@ export const rateRequestSchema = z.object({
   correlation: correlationSchema,
   /** force a shell-side method; default Bell–Delaware (Kern is always computed beside it) */
   shellMethod: shellMethodSchema.optional(),
-});
+}).superRefine(requireFlows);
 export type RateRequest = z.infer<typeof rateRequestSchema>;
 export type RateRequestInput = z.input<typeof rateRequestSchema>;
 
@@ -250,7 +297,7 @@ export const operatingCaseSchema = z.object({
   name: z.string({ error: 'Name the operating case.' }).trim().min(1, { error: 'Name the operating case.' }).max(60, { error: 'Use at most 60 characters for a case name.' }),
   process: z
     .object({
-      massFlow_kg_s: massFlow('Process mass flow').optional(),
+      ...flowShape('Process'),
       inletTemp_C: temperature('Process inlet temperature').optional(),
       outletTemp_C: temperature('Process outlet temperature').optional(),
       pressure_Pa: pressure('Process pressure').optional(),
@@ -258,7 +305,7 @@ export const operatingCaseSchema = z.object({
     .optional(),
   boundary: z
     .object({
-      massFlow_kg_s: massFlow('Coolant mass flow').optional(),
+      ...flowShape('Coolant'),
       inletTemp_C: temperature('Coolant inlet temperature').optional(),
       pressure_Pa: pressure('Coolant pressure').optional(),
       foulingInside_m2K_W: fouling('Tube-side fouling resistance').optional(),
@@ -281,6 +328,7 @@ export const sizeRequestSchema = z.object({
     .max(OPERATING_CASES_MAX, { error: `Give at most ${OPERATING_CASES_MAX} operating cases.` })
     .optional(),
 }).superRefine((r, ctx) => {
+  requireFlows(r, ctx);
   // a design point (issue 11) is the most the stream may see: never below its own operating point
   const designBelow = (design: { pressure_Pa: number; temp_C: number } | undefined, pressure: number, temp: number, path: string[], words: string) => {
     if (!design) return;
@@ -297,8 +345,11 @@ export const sizeRequestSchema = z.object({
   (r.cases ?? []).forEach((c, i) => {
     if (seen.has(c.name.toLowerCase())) ctx.addIssue({ code: 'custom', message: 'Give each operating case its own name.', path: ['cases', i, 'name'] });
     seen.add(c.name.toLowerCase());
+    // a case may leave its flows out (the design point's stay) but gives at most one per stream
+    for (const issue of flowIssues(c.process ?? {}, ['cases', i, 'process'], false)) ctx.addIssue({ code: 'custom', ...issue });
+    for (const issue of flowIssues(c.boundary ?? {}, ['cases', i, 'boundary'], false)) ctx.addIssue({ code: 'custom', ...issue });
     const b = c.boundary ?? {};
-    if (r.boundary.kind === 'wall' && (['massFlow_kg_s', 'inletTemp_C', 'pressure_Pa', 'foulingInside_m2K_W', 'foulingOutside_m2K_W'] as const).some((k) => b[k] !== undefined)) {
+    if (r.boundary.kind === 'wall' && (['massFlow_kg_s', 'volumeFlow_m3_s', 'standardVolumeFlow_m3_s', 'inletTemp_C', 'pressure_Pa', 'foulingInside_m2K_W', 'foulingOutside_m2K_W'] as const).some((k) => b[k] !== undefined)) {
       ctx.addIssue({ code: 'custom', message: 'A wall-cooled duty has no coolant stream: a case may change only the wall temperature.', path: ['cases', i, 'boundary'] });
     }
     if (r.boundary.kind === 'coolant' && b.wallTemp_C !== undefined) {

@@ -97,7 +97,7 @@ describe('impossible duties are explained, not computed', () => {
     expect(code(() => rate({ ...coolReq, boundary: { ...coolant, inletTemp_C: 95 } }))).toEqual(['not-a-cooler', 'boundary.inletTemp_C']);
     expect(code(() => rate({ ...wallReq, process: { ...processWater, massFlow_kg_s: 0 } }))).toEqual(['flow-not-positive', 'process.massFlow_kg_s']);
     expect(code(() => rate({ ...coolReq, boundary: { ...coolant, massFlow_kg_s: -1 } }))).toEqual(['flow-not-positive', 'boundary.massFlow_kg_s']);
-    expect(code(() => rate({ ...wallReq, process: { ...processWater, inletTemp_C: 150 } }))?.[1]).toBe('process.fluid');
+    expect(code(() => rate({ ...wallReq, process: { ...processWater, inletTemp_C: 150 } }))?.[1]).toBe('process.inletTemp_C');
     expect(code(() => rate({ ...coolReq, boundary: { ...coolant, massFlow_kg_s: 0.05 } }))).toEqual(['fluid-range', 'boundary.fluid']);
     expect(code(() => rate({ ...coolReq, boundary: { ...coolant, massFlow_kg_s: 1.5 }, geometry: { ...geometry, tubePasses: 2, tubeLength_m: 12 } }))).toEqual(['lmtd-correction-low', 'geometry.tubePasses']);
     // JSON carries no NaN and zod refuses it (400); callers of the engine itself get a 422-style error

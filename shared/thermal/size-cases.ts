@@ -12,6 +12,8 @@ import type { CaseResult, Design, OperatingCase, SizeRequest, SizeResult } from 
 import { rateRequestFor, type GeometryChoice } from './evaluate';
 import { ThermalInputError } from './errors';
 import { ntuShellsInSeries } from './exchanger/effectiveness';
+import { resolveStream, type StreamInput } from './exchanger/streams';
+import { FLOW_FIELDS, type StreamFlow } from './flow-units';
 import { rateParsed } from './rate';
 
 /** The name the design point goes by in the case list. */
@@ -19,6 +21,25 @@ export const DESIGN_POINT_NAME = 'Design point';
 
 /** 0.05 K: an outlet this close above its target counts as met (the ratings' own solver tolerance is far tighter). */
 const OUTLET_TOLERANCE_K = 0.05;
+
+const NO_FLOW: StreamFlow = { massFlow_kg_s: undefined, volumeFlow_m3_s: undefined, standardVolumeFlow_m3_s: undefined, standardReference: undefined };
+
+/**
+ * A case's flow for one stream (issue 12): the case's own when it gives one, else the design point's
+ * mass flow (a design point given as a volume flow keeps its kg/s, not its m³/h, when a case
+ * changes the inlet temperature or pressure).
+ */
+function caseFlow(base: StreamInput, field: string, override: StreamFlow): StreamFlow {
+  const own = Object.values(FLOW_FIELDS).some((f) => override[f] !== undefined);
+  if (own) return { ...NO_FLOW, ...Object.fromEntries(Object.entries(override).filter(([, v]) => v !== undefined)) };
+  if (base.massFlow_kg_s !== undefined) return {};
+  return { ...NO_FLOW, massFlow_kg_s: resolveStream(base, field).massFlow_kg_s };
+}
+
+/** Drops the keys set to undefined (a flow the case replaced). */
+function defined<T extends object>(o: T): T {
+  return Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined)) as T;
+}
 
 /** The duty with one case's overrides applied (no cases of its own). */
 export function caseDuty(req: SizeRequest, c: OperatingCase): SizeRequest {
@@ -28,16 +49,18 @@ export function caseDuty(req: SizeRequest, c: OperatingCase): SizeRequest {
   const boundary: SizeRequest['boundary'] =
     req.boundary.kind === 'wall'
       ? { ...req.boundary, ...(b.wallTemp_C !== undefined ? { wallTemp_C: b.wallTemp_C } : {}) }
-      : {
+      : defined({
           ...req.boundary,
-          ...(b.massFlow_kg_s !== undefined ? { massFlow_kg_s: b.massFlow_kg_s } : {}),
+          ...caseFlow(req.boundary, 'boundary', b),
           ...(b.inletTemp_C !== undefined ? { inletTemp_C: b.inletTemp_C } : {}),
           ...(b.pressure_Pa !== undefined ? { pressure_Pa: b.pressure_Pa } : {}),
           ...(b.foulingInside_m2K_W !== undefined ? { foulingInside_m2K_W: b.foulingInside_m2K_W } : {}),
           ...(b.foulingOutside_m2K_W !== undefined ? { foulingOutside_m2K_W: b.foulingOutside_m2K_W } : {}),
-        };
-  const p = Object.fromEntries(Object.entries(c.process ?? {}).filter(([, v]) => v !== undefined));
-  return { ...base, process: { ...req.process, ...p }, boundary };
+        });
+  const { massFlow_kg_s, volumeFlow_m3_s, standardVolumeFlow_m3_s, standardReference, ...rest } = c.process ?? {};
+  const p = Object.fromEntries(Object.entries(rest).filter(([, v]) => v !== undefined));
+  const flow = caseFlow(req.process, 'process', { massFlow_kg_s, volumeFlow_m3_s, standardVolumeFlow_m3_s, standardReference });
+  return { ...base, process: defined({ ...req.process, ...flow, ...p }), boundary };
 }
 
 /** The design point and each case as sizing requests. */

@@ -14,6 +14,7 @@ import { ApiError, errorMessage, isApiError, type FieldErrors } from '../api/htt
 import { createQuote } from '../api/quotes';
 import { useQuoteUploads } from './use-quote-uploads';
 import { useSizingForm } from './use-sizing-form';
+import { flowFields } from '@shared/thermal/flow-units';
 import { quantityToSI, type Quantity } from './use-units';
 import type { Explanation } from './use-sizing-run';
 import { useZodForm } from './use-zod-form';
@@ -51,10 +52,12 @@ export interface CaseRow {
 /** The duty's `cases` from the rows (SI); a value that cannot be read is left to the server's 400. */
 function casesOf(rows: CaseRow[], sink: 'coolant' | 'wall'): OperatingCase[] {
   const si = (q: Quantity) => (q.value === null ? undefined : quantityToSI(q));
+  // a flow fills the field its unit names (mass, volume or normal/standard volume; issue 12)
+  const flow = (q: Quantity) => (q.value === null ? {} : flowFields(q.value, q.unit));
   return rows.map((r) => {
-    const boundary = sink === 'coolant' ? { inletTemp_C: si(r.coolantInletTemp), massFlow_kg_s: si(r.coolantFlow) } : {};
-    const process = { massFlow_kg_s: si(r.processFlow) };
-    const defined = (o: Record<string, number | undefined>) => Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined));
+    const boundary = sink === 'coolant' ? { inletTemp_C: si(r.coolantInletTemp), ...flow(r.coolantFlow) } : {};
+    const process = flow(r.processFlow);
+    const defined = (o: object) => Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined));
     const b = defined(boundary);
     const p = defined(process);
     return { name: r.name.trim(), ...(Object.keys(b).length ? { boundary: b } : {}), ...(Object.keys(p).length ? { process: p } : {}) };

@@ -5,7 +5,7 @@
  */
 import type { SizeRequest } from '@shared/schemas/thermal';
 import { CONSTANT_FLUID, useSizingForm, type SizingForm } from './use-sizing-form';
-import { quantity } from './use-units';
+import { flowQuantity, quantity } from './use-units';
 
 /** Puts a stored duty into the sizing form, in SI units. */
 export function fillSizingForm(form: SizingForm, duty: SizeRequest): void {
@@ -26,7 +26,7 @@ export function fillSizingForm(form: SizingForm, duty: SizeRequest): void {
     m.process.intake.humidity_pct = Math.round(p.intake.relativeHumidity * 1000) / 10;
     m.process.intake.pressure = quantity('pressure', p.intake.pressure_Pa / 1e5, 'bar', 'absolute');
   }
-  m.process.massFlow = quantity('massFlow', p.massFlow_kg_s, 'kg/s');
+  m.process.massFlow = flowQuantity(p);
   m.process.inletTemp = quantity('temperature', p.inletTemp_C, 'degC');
   m.process.outletTemp = quantity('temperature', p.outletTemp_C, 'degC');
   m.process.pressure = quantity('pressure', p.pressure_Pa / 1e5, 'bar', 'absolute');
@@ -36,7 +36,7 @@ export function fillSizingForm(form: SizingForm, duty: SizeRequest): void {
   if (b.kind === 'wall') m.wallTemp = quantity('temperature', b.wallTemp_C, 'degC');
   else {
     if (typeof b.fluid === 'string') m.coolant.fluid = b.fluid;
-    m.coolant.massFlow = quantity('massFlow', b.massFlow_kg_s, 'kg/s');
+    m.coolant.massFlow = flowQuantity(b);
     m.coolant.inletTemp = quantity('temperature', b.inletTemp_C, 'degC');
     m.coolant.pressure = quantity('pressure', b.pressure_Pa / 1e5, 'bar', 'absolute');
     m.coolant.foulingInside = quantity('fouling', b.foulingInside_m2K_W ?? null, 'm^2 K/W');

@@ -8,12 +8,22 @@
 import { computed, reactive, ref, watch } from 'vue';
 import { sizeRequestSchema, type SizeRequest, type SizeRequestInput } from '@shared/schemas/thermal';
 import { UnitInputError, type UnitSystem } from '@shared/thermal/units';
+import { FLOW_FIELDS, flowFields, flowUnit } from '@shared/thermal/flow-units';
+import { flowInUnit } from '@shared/thermal/flow-convert';
 import type { ApiError } from '../api/http';
 import { fetchFluids, type FluidInfo } from '../api/thermal';
-import { quantity, quantityToSI, switchSystem, type Quantity } from './use-units';
+import { inUnit, quantity, quantityToSI, switchSystem, tidy, type Quantity } from './use-units';
 import { useZodForm } from './use-zod-form';
 
 export const CONSTANT_FLUID = 'constant';
+
+/**
+ * The request field a stream's flow fills, by the unit chosen (issue 12): `process.massFlow_kg_s`,
+ * `process.volumeFlow_m3_s` or `process.standardVolumeFlow_m3_s`; messages are keyed by it.
+ */
+export function flowPath(q: Quantity, base: string): string {
+  return `${base}.${FLOW_FIELDS[flowUnit(q.unit)?.basis ?? 'mass']}`;
+}
 
 /**
  * Defaults: an invented duty, an engine jacket-water loop of 30 % ethylene glycol cooled by plant
@@ -35,7 +45,8 @@ function defaults() {
         humidity_pct: 60 as number | null,
         pressure: quantity('pressure', 1.013, 'bar', 'absolute'),
       },
-      massFlow: quantity('massFlow', 3.2, 'kg/s'),
+      /** the flow: mass, volume at the inlet or normal/standard volume, by its unit */
+      massFlow: quantity('flow', 3.2, 'kg/s'),
       inletTemp: quantity('temperature', 72, 'degC'),
       outletTemp: quantity('temperature', 50, 'degC'),
       pressure: quantity('pressure', 3, 'bar', 'gauge'),
@@ -47,7 +58,7 @@ function defaults() {
     wallTemp: quantity('temperature', 30, 'degC'),
     coolant: {
       fluid: 'water',
-      massFlow: quantity('massFlow', 4.5, 'kg/s'),
+      massFlow: quantity('flow', 4.5, 'kg/s'),
       inletTemp: quantity('temperature', 27, 'degC'),
       pressure: quantity('pressure', 4, 'bar', 'gauge'),
       foulingInside: quantity('fouling', 0.00009, 'm^2 K/W'),
@@ -104,6 +115,18 @@ function build(m: SizingModel): Built {
     if (tq.value === null) empties[`${base}.design.temp_C`] = 'Give the design temperature too, or leave both empty for the defaults.';
     return { pressure_Pa, temp_C };
   };
+  /** a stream's flow as the one request field its unit names (with the reference of a standard flow) */
+  const flowOf = (q: Quantity, base: string): Record<string, unknown> => {
+    if (q.value === null) {
+      empties[flowPath(q, base)] = 'Enter a value.';
+      return {};
+    }
+    if (!flowUnit(q.unit)) {
+      problems[flowPath(q, base)] = 'Choose a flow unit from the list.';
+      return {};
+    }
+    return { ...flowFields(q.value, q.unit) };
+  };
   const p = m.process;
   const c = p.constant;
   const fluid =
@@ -120,7 +143,7 @@ function build(m: SizingModel): Built {
   const process: Record<string, unknown> = {
     fluid,
     pressure_Pa: read(p.pressure, 'process.pressure_Pa'),
-    massFlow_kg_s: read(p.massFlow, 'process.massFlow_kg_s'),
+    ...flowOf(p.massFlow, 'process'),
     inletTemp_C: read(p.inletTemp, 'process.inletTemp_C'),
     outletTemp_C: read(p.outletTemp, 'process.outletTemp_C'),
     design: designOf(p.designPressure, p.designTemp, 'process'),
@@ -141,7 +164,7 @@ function build(m: SizingModel): Built {
           kind: 'coolant',
           fluid: k.fluid,
           pressure_Pa: read(k.pressure, 'boundary.pressure_Pa'),
-          massFlow_kg_s: read(k.massFlow, 'boundary.massFlow_kg_s'),
+          ...flowOf(k.massFlow, 'boundary'),
           inletTemp_C: read(k.inletTemp, 'boundary.inletTemp_C'),
           foulingInside_m2K_W: read(k.foulingInside, 'boundary.foulingInside_m2K_W', true),
           foulingOutside_m2K_W: read(k.foulingOutside, 'boundary.foulingOutside_m2K_W', true),
@@ -207,6 +230,25 @@ export function useSizingForm() {
     return parsed.success ? (prune(b.input) as SizeRequestInput) : null;
   });
 
+  /**
+   * A stream's flow field moved to another unit: within a basis a plain conversion; between mass,
+   * volume and normal/standard volume through the fluid's density at the stream's inlet state (the
+   * engine's own conversion); empty when the stream is not complete enough to know its density.
+   */
+  function flowToUnit(stream: 'process' | 'boundary', unit: string): void {
+    const target = stream === 'process' ? model.process : model.coolant;
+    const q = target.massFlow;
+    const same = flowUnit(q.unit)?.basis === flowUnit(unit)?.basis;
+    if (same || q.value === null) {
+      target.massFlow = inUnit(q, unit);
+      return;
+    }
+    const s = built.value.input[stream] as Record<string, unknown> | undefined;
+    const ready = s && s.fluid !== undefined && typeof s.inletTemp_C === 'number' && typeof s.pressure_Pa === 'number';
+    const v = ready ? flowInUnit(s as Parameters<typeof flowInUnit>[0], q.value, q.unit, unit) : null;
+    target.massFlow = { ...q, unit, value: v === null ? null : tidy(v) };
+  }
+
   function setSystem(system: UnitSystem): void {
     model.system = system;
     switchSystem(model as unknown as Record<string, unknown>, system);
@@ -230,6 +272,7 @@ export function useSizingForm() {
     validate,
     applyServerError: (error: ApiError) => zod.applyServerError(error),
     setSystem,
+    flowToUnit,
     loadFluids,
   };
 }

@@ -144,7 +144,7 @@ describe('glycol strength in a sizing request', () => {
     const res = await request(t.app).post('/api/thermal/size').send(sizeBody('ethylene-glycol-20', -12));
     expect(res.status).toBe(422);
     expect(res.body.error.code).toBe('fluid-frozen');
-    expect(res.body.error.fields).toHaveProperty(['boundary.fluid']);
+    expect(res.body.error.fields).toHaveProperty(['boundary.inletTemp_C']);
     expect(res.body.error.message).toMatch(/20 % by mass begins to freeze at -7\.9 °C/);
   });
 });

@@ -5,6 +5,7 @@
  */
 import type { FluidRef, SizeRequest } from '../../../shared/schemas/thermal';
 import { listFluids } from '../../../shared/thermal/fluids';
+import { flowText } from '../../../shared/thermal/flow-units';
 import type { UnitSystem } from '../../../shared/thermal/units';
 import { showQuantity } from './quantities';
 
@@ -22,11 +23,12 @@ export function dutyRows(duty: SizeRequest, units: UnitSystem): string[][] {
   const b = duty.boundary;
   const t = (v: number) => showQuantity(v, 'temperature', units);
   const gauge = (v: number) => showQuantity(v, 'pressure', units, { pressureBasis: 'gauge' });
-  const flow = (v: number) => showQuantity(v, 'massFlow', units, { digits: 4 });
+  // the flow as the customer gave it (mass, volume at the inlet, or normal/standard volume; issue 12)
+  const flow = (f: Parameters<typeof flowText>[0]) => (f.massFlow_kg_s !== undefined ? showQuantity(f.massFlow_kg_s, 'massFlow', units, { digits: 4 }) : flowText(f, units));
   const coolant = b.kind === 'coolant' ? b : undefined;
   const rows: string[][] = [
     ['Fluid', fluidName(p.fluid), coolant ? fluidName(coolant.fluid) : 'Constant wall temperature'],
-    ['Mass flow', flow(p.massFlow_kg_s), coolant ? flow(coolant.massFlow_kg_s) : DASH],
+    ['Flow', flow(p), coolant ? flow(coolant) : DASH],
     ['Inlet temperature', t(p.inletTemp_C), coolant ? t(coolant.inletTemp_C) : DASH],
     ['Target outlet temperature', t(p.outletTemp_C), DASH],
     ['Operating pressure', gauge(p.pressure_Pa), coolant ? gauge(coolant.pressure_Pa) : DASH],

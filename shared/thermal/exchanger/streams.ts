@@ -15,6 +15,8 @@ import {
   type FluidProperties,
 } from '../fluids';
 import type { FluidRef } from '../../schemas/thermal';
+import { massFlowOf } from '../flow-basis';
+import type { StreamFlow } from '../flow-units';
 import { memoProperties } from './solve';
 
 export interface Stream {
@@ -39,17 +41,25 @@ export function requireFinite(value: number, field: string, what: string): void 
 export function requirePositiveFlow(value: number, field: string): void {
   requireFinite(value, field, 'The mass flow');
   if (!(value > 0)) {
-    throw new ThermalInputError('flow-not-positive', `The mass flow must be above zero (got ${value} kg/s): with no flow there is nothing to cool or to cool with.`, field);
+    // 4 significant digits and kg/h (the SI unit of forms): never "-0.001388888888888889 kg/s"
+    const shown = Number((value * 3600).toPrecision(4));
+    throw new ThermalInputError('flow-not-positive', `The mass flow must be above zero (got ${shown} kg/h): with no flow there is nothing to cool or to cool with.`, field);
   }
 }
 
-/** Re-throws a fluid's ThermalInputError with the request field it belongs to. */
-function tagged(field: string, f: (t: number) => FluidProperties) {
+/**
+ * Re-throws a fluid's ThermalInputError with the request field it belongs to: a state outside the
+ * fluid's data at the stream's inlet temperature blames that temperature (issue 12: an absurd inlet
+ * temperature is not the fluid's fault); at other temperatures of the stream, the fluid.
+ */
+function tagged(field: string, inletTemp_C: number, f: (t: number) => FluidProperties) {
   return (temp_C: number): FluidProperties => {
     try {
       return f(temp_C);
     } catch (e) {
-      if (e instanceof ThermalInputError && !e.field) throw new ThermalInputError(e.code, e.message, `${field}.fluid`);
+      if (e instanceof ThermalInputError && !e.field) {
+        throw new ThermalInputError(e.code, e.message, temp_C === inletTemp_C ? `${field}.inletTemp_C` : `${field}.fluid`);
+      }
       throw e;
     }
   };
@@ -60,32 +70,32 @@ export function resolveFluid(ref: FluidRef, field: string): Fluid {
   return constantFluid(ref.constant, `${field}.fluid.constant`);
 }
 
-export interface StreamInput {
+/** A stream as a request gives it: its flow as exactly one of mass, volume or normal/standard volume (`flow-basis.ts`). */
+export interface StreamInput extends StreamFlow {
   fluid: FluidRef;
   pressure_Pa: number;
-  massFlow_kg_s: number;
   inletTemp_C: number;
   intake?: { temp_C: number; relativeHumidity: number; pressure_Pa: number };
 }
 
+/** Resolves a request's stream; a volume or normal/standard volume flow becomes its mass flow here (`massFlowOf`). */
 export function resolveStream(s: StreamInput, field: string): Stream {
-  requirePositiveFlow(s.massFlow_kg_s, `${field}.massFlow_kg_s`);
+  if (s.massFlow_kg_s !== undefined) requirePositiveFlow(s.massFlow_kg_s, `${field}.massFlow_kg_s`);
   requireFinite(s.inletTemp_C, `${field}.inletTemp_C`, 'The inlet temperature');
   requireFinite(s.pressure_Pa, `${field}.pressure_Pa`, 'The pressure');
   const fluid = resolveFluid(s.fluid, field);
   const p = s.pressure_Pa;
+  const tIn = s.inletTemp_C;
   const aqueous = fluid.id === 'water' || fluid.id.includes('glycol');
   if (fluid.id === 'air-moist' && s.intake) {
     const w = humidityRatioFromIntake(s.intake);
-    return {
-      fluid, field, pressure_Pa: p, massFlow_kg_s: s.massFlow_kg_s, inletTemp_C: s.inletTemp_C, aqueous, humidityRatio: w,
-      properties: memoProperties(tagged(field, (t) => moistAirProperties(t, p, w))),
-    };
+    const properties = memoProperties(tagged(field, tIn, (t) => moistAirProperties(t, p, w)));
+    const massFlow_kg_s = massFlowOf(s, { ...fluid, properties: (t) => properties(t) }, field, w);
+    return { fluid, field, pressure_Pa: p, massFlow_kg_s, inletTemp_C: tIn, aqueous, humidityRatio: w, properties };
   }
-  return {
-    fluid, field, pressure_Pa: p, massFlow_kg_s: s.massFlow_kg_s, inletTemp_C: s.inletTemp_C, aqueous,
-    properties: memoProperties(tagged(field, (t) => fluid.properties(t, p))),
-  };
+  const properties = memoProperties(tagged(field, tIn, (t) => fluid.properties(t, p)));
+  const massFlow_kg_s = massFlowOf(s, fluid, field);
+  return { fluid, field, pressure_Pa: p, massFlow_kg_s, inletTemp_C: tIn, aqueous, properties };
 }
 
 /**

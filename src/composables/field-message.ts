@@ -1,0 +1,64 @@
+/**
+ * Messages under a quantity field in the unit the user chose (issue 12): the schema's bounds and the
+ * engine's explanations state SI numbers ("between -1000 and 1000 kg/s", "got -5 kg/h", "500 °C is
+ * outside …"); here every number written in a unit of the field's kind is rewritten in the field's
+ * unit with four significant digits and digit grouping, e.g. "between -7,937,000 and 7,937,000 lb/h".
+ */
+import { fromSI, toSI, type QuantityKind } from '@shared/thermal/units';
+import { flowUnit } from '@shared/thermal/flow-units';
+import { unitLabel, type Quantity } from './use-units';
+
+const NUM = String.raw`(-?\d[\d,]*(?:\.\d+)?(?:e[+-]?\d+)?)`;
+
+/** Unit texts messages use, per kind, with the mathjs unit (or flow unit) each stands for. */
+const WRITTEN: Partial<Record<Quantity['kind'], [RegExp, string][]>> = {
+  temperature: [[new RegExp(`${NUM}\\s*°C`, 'g'), 'degC']],
+  pressure: [
+    [new RegExp(`${NUM}\\s*Pa \\(absolute\\)`, 'g'), 'Pa'],
+    [new RegExp(`${NUM}\\s*bar\\(a\\)`, 'g'), 'bar'],
+  ],
+  pressureDrop: [[new RegExp(`${NUM}\\s*Pa\\b`, 'g'), 'Pa']],
+  length: [[new RegExp(`${NUM}\\s*m\\b(?![²³/])`, 'g'), 'm']],
+  flow: [
+    [new RegExp(`${NUM}\\s*kg/s`, 'g'), 'kg/s'],
+    [new RegExp(`${NUM}\\s*kg/h`, 'g'), 'kg/h'],
+    [new RegExp(`${NUM}\\s*m³/s`, 'g'), 'm^3/s'],
+    [new RegExp(`${NUM}\\s*m³/h`, 'g'), 'm^3/h'],
+  ],
+};
+
+function shown(x: number): string {
+  return (Number(x.toPrecision(4)) + 0).toLocaleString('en-US', { maximumSignificantDigits: 4 });
+}
+
+/** One number of a message, written in `unit` of the message, in the field's unit; null when it cannot be converted. */
+function convert(value: number, written: string, q: Quantity): string | null {
+  if (q.kind === 'flow') {
+    // the message's number is in the SI of the field it is about: kg/s for a mass flow, m³/s for a
+    // volume flow at its inlet state or at the request's own reference
+    const target = flowUnit(q.unit);
+    const mass = written.startsWith('kg');
+    if (!target || mass !== (target.basis === 'mass')) return null;
+    const si = written.endsWith('/h') ? value / 3600 : value;
+    return `${shown(si / target.factor)} ${target.label}`;
+  }
+  try {
+    const kind = q.kind as QuantityKind;
+    const si = toSI({ value, unit: written }, kind, { pressureBasis: 'absolute' });
+    const d = fromSI(si, kind, { unit: q.unit }, { pressureBasis: q.kind === 'pressure' ? 'absolute' : undefined });
+    const label = q.kind === 'pressure' ? d.label : unitLabel(q.kind, q.unit);
+    return `${shown(d.value)} ${label}`;
+  } catch {
+    return null;
+  }
+}
+
+/** `message` with its numbers in the field's unit (unchanged where it speaks of other quantities). */
+export function inFieldUnit(message: string | undefined, q: Quantity): string | undefined {
+  if (!message) return message;
+  let out = message;
+  for (const [pattern, written] of WRITTEN[q.kind] ?? []) {
+    out = out.replace(pattern, (all, num: string) => convert(Number(num.replace(/,/g, '')), written, q) ?? all);
+  }
+  return out;
+}
