@@ -1,14 +1,9 @@
 /** Words and tag colours for quote statuses, shared by the queue and the workspace. */
 import type { QuoteStatus } from '@shared/schemas/quotes';
+import { QUOTE_STATUS_LABEL } from '@shared/status-words';
 
-export const STATUS_LABELS: Record<QuoteStatus, string> = {
-  'in-review': 'In review',
-  questions: 'Questions sent',
-  approved: 'Approved',
-  declined: 'Declined',
-  accepted: 'Accepted',
-  ordered: 'Ordered',
-};
+/** Staff words for quote statuses (shared with the CSV export). */
+export const STATUS_LABELS: Record<QuoteStatus, string> = QUOTE_STATUS_LABEL;
 
 export const STATUS_TAG: Record<QuoteStatus, 'default' | 'info' | 'success' | 'warning' | 'error'> = {
   'in-review': 'info',

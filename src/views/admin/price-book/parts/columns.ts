@@ -4,5 +4,7 @@ export interface Column {
   title: string;
   kind: 'text' | 'number' | 'money' | 'select';
   options?: string[];
+  /** words for a select's options (a material's name for its id) */
+  optionLabel?: (value: string) => string;
   width?: number;
 }
