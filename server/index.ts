@@ -6,6 +6,7 @@ import { startJobs } from './lib/jobs';
 import { createTransport, queuedMailer, startMailWorker } from './lib/mail';
 import { createStripe } from './lib/payments';
 import { startRefundWorker } from './features/orders/refunds';
+import { offerAttachmentRenderer } from './features/quotes/offer';
 
 // A failed promise nobody awaited (a job-queue call while PostgreSQL is down) is logged, and the app
 // keeps serving: requests answer 503 until the database is back. A thrown exception nobody caught
@@ -28,7 +29,7 @@ try {
 
 const database = createDatabase(config.DATABASE_URL);
 const jobs = await startJobs(config.DATABASE_URL);
-await startMailWorker(jobs, database.db, createTransport(config.SMTP_URL), config.MAIL_FROM);
+await startMailWorker(jobs, database.db, createTransport(config.SMTP_URL), config.MAIL_FROM, offerAttachmentRenderer(database.db));
 const stripe = createStripe(config);
 await startRefundWorker(jobs, database.db, stripe);
 

@@ -2,7 +2,7 @@
  * The local SMTP sink: accepts every message on loopback, parses it, stores it, and lists it over
  * HTTP for the app's admin Outbox and for tests. Never relays anything anywhere.
  */
-import { randomUUID } from 'node:crypto';
+import { createHash, randomUUID } from 'node:crypto';
 import { createServer } from 'node:http';
 import { join, resolve } from 'node:path';
 import { simpleParser, type AddressObject } from 'mailparser';
@@ -33,6 +33,13 @@ const smtp = new SMTPServer({
       .then((mail) => {
         const to = addresses(mail.to);
         const html = typeof mail.html === 'string' ? mail.html : undefined;
+        const files = mail.attachments.map((a) => a.content);
+        const attachments = mail.attachments.map((a) => ({
+          filename: a.filename ?? 'attachment',
+          contentType: a.contentType,
+          size: a.content.length,
+          sha256: createHash('sha256').update(a.content).digest('hex'),
+        }));
         store.add({
           id: randomUUID(),
           from: addresses(mail.from)[0] ?? session.envelope.mailFrom?.toString() ?? '',
@@ -41,8 +48,9 @@ const smtp = new SMTPServer({
           text: mail.text ?? '',
           ...(html ? { html } : {}),
           links: extractLinks(mail.text, html),
+          ...(attachments.length ? { attachments } : {}),
           receivedAt: new Date().toISOString(),
-        });
+        }, files);
         callback();
       })
       .catch((err: Error) => callback(err));
@@ -59,11 +67,18 @@ const http = createServer((req, res) => {
   if (url.pathname === '/messages' && req.method === 'GET') {
     return send(200, { items: store.list(url.searchParams.get('to') ?? undefined) });
   }
+  const file = /^\/messages\/([\w-]+)\/attachments\/(\d+)$/.exec(url.pathname);
+  if (file && req.method === 'GET') {
+    const found = store.attachment(file[1]!, Number(file[2]));
+    if (!found) return send(404, { error: { code: 'not-found', message: 'No such attachment.' } });
+    res.writeHead(200, { 'content-type': found.meta.contentType, 'content-length': found.content.length }).end(found.content);
+    return;
+  }
   if (url.pathname === '/messages' && req.method === 'DELETE') {
     store.clear();
     return send(200, { items: [] });
   }
-  send(404, { error: { code: 'not-found', message: 'GET or DELETE /messages' } });
+  send(404, { error: { code: 'not-found', message: 'GET or DELETE /messages, GET /messages/:id/attachments/:index' } });
 });
 http.listen(env.SMTP_SINK_HTTP_PORT, '127.0.0.1', () =>
   console.log(`[smtp-sink] messages at http://127.0.0.1:${env.SMTP_SINK_HTTP_PORT}/messages`),

@@ -1,6 +1,14 @@
 import { mkdirSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 
+/** A caught attachment: listed without its bytes; the bytes at GET /messages/:id/attachments/:index. */
+export interface CaughtAttachment {
+  filename: string;
+  contentType: string;
+  size: number;
+  sha256: string;
+}
+
 export interface CaughtMessage {
   id: string;
   from: string;
@@ -10,6 +18,7 @@ export interface CaughtMessage {
   html?: string;
   /** every http(s) link in the text and html, in order, without duplicates */
   links: string[];
+  attachments?: CaughtAttachment[];
   receivedAt: string;
 }
 
@@ -26,10 +35,18 @@ export class MailStore {
   }
 
   /** Written to disk first: a message that could not be kept is refused, never half-caught. */
-  add(message: CaughtMessage) {
+  add(message: CaughtMessage, files: Buffer[] = []) {
     mkdirSync(this.dir, { recursive: true });
+    files.forEach((content, i) => writeFileSync(join(this.dir, `${message.id}.${i}.bin`), content));
     writeFileSync(join(this.dir, `${message.id}.json`), JSON.stringify(message, null, 2));
     this.messages.push(message);
+  }
+
+  /** The bytes of attachment `index` of message `id`, if caught. */
+  attachment(id: string, index: number): { meta: CaughtAttachment; content: Buffer } | undefined {
+    const meta = this.messages.find((m) => m.id === id)?.attachments?.[index];
+    if (!meta) return undefined;
+    return { meta, content: readFileSync(join(this.dir, `${id}.${index}.bin`)) };
   }
 
   /** Newest first, optionally only those addressed to `to`. */
@@ -39,7 +56,10 @@ export class MailStore {
   }
 
   clear() {
-    for (const m of this.messages) rmSync(join(this.dir, `${m.id}.json`), { force: true });
+    for (const m of this.messages) {
+      rmSync(join(this.dir, `${m.id}.json`), { force: true });
+      (m.attachments ?? []).forEach((_a, i) => rmSync(join(this.dir, `${m.id}.${i}.bin`), { force: true }));
+    }
     this.messages = [];
   }
 }

@@ -1,6 +1,7 @@
 /**
  * E-mail about orders: receipts, payment problems, steps the customer should know of, refunds. Each
- * takes the transaction of the change it reports: the message is queued with it or not at all.
+ * takes the transaction of the change it reports: the message is queued with it or not at all. Mail
+ * about money also goes to the billing contact given at acceptance.
  */
 import { poLabel } from '../../../shared/format';
 import { ORDER_STATUS_LABEL, type OrderStatus } from '../../../shared/schemas/orders';
@@ -13,20 +14,35 @@ import * as repo from './repository';
 const SIGNATURE = '\n\nAlder Creek Thermal Works · Bundlesmith';
 const orderLink = (deps: OrderDeps, id: string) => `${deps.config.APP_URL}/orders/${id}`;
 
+/**
+ * Who hears about money (receipts, a failed deposit, refunds): the buyer who accepted, the quote's
+ * submitter and the billing contact given at acceptance, each once (case-insensitive).
+ */
+async function billingRecipients(tx: Executor, paymentIntentId: string, ...people: (string | undefined)[]): Promise<string[]> {
+  const acceptance = await repo.findAcceptanceByIntent(tx, paymentIntentId);
+  const billing = (acceptance?.billingContact as { email?: string } | undefined)?.email;
+  const seen = new Map<string, string>();
+  for (const email of [...people, billing]) if (email && !seen.has(email.toLowerCase())) seen.set(email.toLowerCase(), email);
+  return [...seen.values()];
+}
+
 /** Steps the customer hears of by e-mail (the others show on the timeline only). */
 export const CUSTOMER_STEPS: OrderStatus[] = ['released', 'hydrotest', 'ready-to-ship', 'shipped', 'on-hold', 'cancelled'];
 
 export async function notifyPaid(deps: OrderDeps, tx: Executor, orderId: string) {
   const o = (await repo.findOrder(tx, orderId))!;
   const balance = o.totalMinor - o.depositMinor;
-  await deps.mailer.send({
-    to: o.buyerEmail,
-    subject: `Receipt: deposit for order ${o.number}`,
-    text:
-      `Hello ${o.buyerName},\n\nWe received your deposit of ${money(o.depositMinor, o.currency)} for order ${o.number} ` +
-      `(offer ${o.quoteNumber}, ${poLabel(o.poNumber)}).\nOrder total ${money(o.totalMinor, o.currency)}; balance due before shipment ` +
-      `${money(balance, o.currency)}.\n\nFollow the order here: ${orderLink(deps, orderId)}${SIGNATURE}`,
-  }, tx);
+  const submitter = (await quoteRepo.findQuote(tx, o.quoteId))?.submittedByEmail;
+  for (const to of await billingRecipients(tx, o.paymentIntentId, o.buyerEmail, submitter)) {
+    await deps.mailer.send({
+      to,
+      subject: `Receipt: deposit for order ${o.number}`,
+      text:
+        `Hello,\n\nWe received the deposit of ${money(o.depositMinor, o.currency)} for order ${o.number} of ${o.organizationName} ` +
+        `(offer ${o.quoteNumber}, ${poLabel(o.poNumber)}).\nOrder total ${money(o.totalMinor, o.currency)}; balance due before shipment ` +
+        `${money(balance, o.currency)}.\n\nFollow the order here: ${orderLink(deps, orderId)}${SIGNATURE}`,
+    }, tx);
+  }
   for (const email of await quoteRepo.staffEmails(tx, 'sales')) {
     await deps.mailer.send({
       to: email,
@@ -41,11 +57,13 @@ export async function notifyPaymentFailed(deps: OrderDeps, tx: Executor, intentI
   if (!acceptance) return;
   const quote = await quoteRepo.findQuote(tx, acceptance.quoteId);
   if (!quote) return;
-  await deps.mailer.send({
-    to: quote.submittedByEmail,
-    subject: `Deposit for ${quote.number} not paid`,
-    text: `The deposit payment for ${quote.number} did not go through: ${reason}\nYour acceptance stands; pay again from the offer page: ${deps.config.APP_URL}/quotes/${quote.id}${SIGNATURE}`,
-  }, tx);
+  for (const to of await billingRecipients(tx, intentId, quote.submittedByEmail)) {
+    await deps.mailer.send({
+      to,
+      subject: `Deposit for ${quote.number} not paid`,
+      text: `The deposit payment for ${quote.number} did not go through: ${reason}\nThe acceptance stands; pay again from the offer page: ${deps.config.APP_URL}/quotes/${quote.id}${SIGNATURE}`,
+    }, tx);
+  }
 }
 
 export async function notifyStep(deps: OrderDeps, tx: Executor, orderId: string, status: OrderStatus, note?: string | null) {
@@ -60,9 +78,12 @@ export async function notifyStep(deps: OrderDeps, tx: Executor, orderId: string,
 
 export async function notifyRefunded(deps: OrderDeps, tx: Executor, orderId: string) {
   const o = (await repo.findOrder(tx, orderId))!;
-  await deps.mailer.send({
-    to: o.buyerEmail,
-    subject: `Refund for cancelled order ${o.number}`,
-    text: `We refunded ${money(o.refundedMinor, o.currency)} of your deposit for order ${o.number}.${SIGNATURE}`,
-  }, tx);
+  const submitter = (await quoteRepo.findQuote(tx, o.quoteId))?.submittedByEmail;
+  for (const to of await billingRecipients(tx, o.paymentIntentId, o.buyerEmail, submitter)) {
+    await deps.mailer.send({
+      to,
+      subject: `Refund for cancelled order ${o.number}`,
+      text: `We refunded ${money(o.refundedMinor, o.currency)} of the deposit for order ${o.number} of ${o.organizationName}.${SIGNATURE}`,
+    }, tx);
+  }
 }

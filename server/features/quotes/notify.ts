@@ -4,6 +4,7 @@
  * e-mail commit together or not at all, and the request never waits for the SMTP server.
  */
 import { formatMoney, plural } from '../../../shared/format';
+import type { MailAttachmentRef } from '../../lib/mail';
 import type { Executor } from '../../lib/sql-adapter';
 import type { QuoteDeps } from './deps';
 import * as repo from './repository';
@@ -43,12 +44,17 @@ export async function notifySubmitted(deps: QuoteDeps, tx: Executor, q: Submitte
   }
 }
 
-/** To the quote's submitter. */
-export async function notifyCustomer(deps: QuoteDeps, tx: Executor, quoteId: string, subject: string, body: string) {
+/** To the quote's submitter, with the documents `attachments` names (the offer PDF). */
+export async function notifyCustomer(deps: QuoteDeps, tx: Executor, quoteId: string, subject: string, body: string, attachments?: MailAttachmentRef[]) {
   const row = await repo.findQuote(tx, quoteId);
   if (!row) return;
   await deps.mailer.send(
-    { to: row.submittedByEmail, subject, text: `Hello ${row.submittedByName},\n\n${body}\n\n${link(deps, quoteId)}${SIGNATURE}` },
+    {
+      to: row.submittedByEmail,
+      subject,
+      text: `Hello ${row.submittedByName},\n\n${body}\n\n${link(deps, quoteId)}${SIGNATURE}`,
+      ...(attachments?.length ? { attachments } : {}),
+    },
     tx,
   );
 }

@@ -3,7 +3,9 @@
  * the customer's units, the design (which fluid goes where and why, shells in series, baffles), its
  * predicted performance with the methods on a technical line (tube side; shell side by Bell–Delaware
  * with Kern's h as a second opinion and the J factors), the price as the fabricator chooses to show
- * it, payment, lead time, validity, terms and the engineering cautions of the domain brief.
+ * it, payment, lead time, validity, terms and the engineering cautions of the domain brief; the sales
+ * engineer's message at approval on the first page; a datasheet page last (issue 12: design pressure and
+ * temperature per side, connections, construction, weights, the temperature profile).
  */
 import { formatDate } from '../../../shared/format';
 import type { Revision } from '../../../shared/schemas/quotes';
@@ -20,6 +22,7 @@ import { paymentRows, priceRows } from '../../lib/pdf/price-rows';
 import { showQuantity } from '../../lib/pdf/quantities';
 import { drawFacts, drawTable, factsTable, tableKeepHeight, type TableOptions } from '../../lib/pdf/table';
 import { processSideOf, shellsOf } from '../pricing/design-fields';
+import { drawDatasheet } from './offer-datasheet';
 
 /** Everything the offer shows; the caller loads it (quote, revision, organisation, price book). */
 export interface OfferPdfInput {
@@ -83,12 +86,21 @@ function drawOpening(doc: PDFKit.PDFDocument, o: OfferPdfInput): void {
     ['Lead time', `${r.leadTimeWeeks} weeks`],
   ];
   drawFacts(doc, facts, 9.5);
+  if (r.message) {
+    // the sales engineer's words at approval, as sent in the offer's e-mail
+    drawHeading(doc, `A word from ${r.createdBy}`, 30);
+    drawParagraphs(doc, r.message.split(/\n{2,}/).map((p) => p.trim()).filter(Boolean));
+  }
 }
 
-/** A section heading kept on the page of the table that follows it. */
+/**
+ * A section heading kept on the page with the start of the table that follows it: the table's
+ * first rows, so a long table fills the page it starts on instead of leaving it half empty.
+ */
 function section(doc: PDFKit.PDFDocument, title: string, table: TableOptions, extra = 0): void {
-  drawHeading(doc, title, tableKeepHeight(doc, table) + extra);
-  drawTable(doc, table);
+  const flowing = { keepRows: 3, ...table };
+  drawHeading(doc, title, tableKeepHeight(doc, flowing) + extra);
+  drawTable(doc, flowing);
 }
 
 function drawEngineering(doc: PDFKit.PDFDocument, o: OfferPdfInput): void {
@@ -105,7 +117,7 @@ function drawEngineering(doc: PDFKit.PDFDocument, o: OfferPdfInput): void {
   doc.moveDown(0.5);
   drawTable(doc, factsTable(limitPairs(duty, o.units)));
   const reasons = designReasons(design);
-  section(doc, '2  Design', factsTable(designPairs(design, o.units, duty)), reasons.length ? 40 : 0);
+  section(doc, '2  Design', factsTable(designPairs(design, o.units, duty)));
   if (reasons.length) {
     doc.moveDown(0.4);
     drawParagraphs(doc, reasons, 9);
@@ -160,11 +172,15 @@ function drawCommercial(doc: PDFKit.PDFDocument, o: OfferPdfInput): void {
   }
 }
 
+/** Section numbers after the price: terms (when any), alternatives (when any), then the datasheet. */
+const alternativesNumber = (o: OfferPdfInput) => (o.terms.length > 0 ? 6 : 5);
+const datasheetNumber = (o: OfferPdfInput) => alternativesNumber(o) + (o.revision.alternatives.length > 0 ? 1 : 0);
+
 function drawAlternatives(doc: PDFKit.PDFDocument, o: OfferPdfInput): void {
   const alts = o.revision.alternatives.slice(0, 5);
   if (alts.length === 0) return;
   const len = (v: number) => showQuantity(v, 'length', o.units, { unit: o.units === 'SI' ? 'm' : 'ft' });
-  section(doc, `${o.terms.length > 0 ? 6 : 5}  Alternative designs (priced on request)`, {
+  section(doc, `${alternativesNumber(o)}  Alternative designs (priced on request)`, {
     fontSize: 8.5,
     columns: [
       { header: 'Tubes (per shell)', weight: 22 },
@@ -208,6 +224,7 @@ export async function renderOfferPdf(raw: OfferPdfInput): Promise<Buffer> {
   drawEngineering(doc, input);
   drawCommercial(doc, input);
   drawAlternatives(doc, input);
+  drawDatasheet(doc, r, input.units, `${datasheetNumber(input)}  Datasheet`);
   drawPageFrames(doc, {
     name: input.fabricator.name,
     tagline: 'Shell-and-tube coolers built to order',

@@ -44,7 +44,16 @@ export async function approve(deps: QuoteDeps, user: SessionUser, id: string, in
   const validUntil = new Date(Date.now() + book.data.offerValidityDays * 86_400_000);
   const number = row.currentRevision + 1;
   await deps.db.transaction(async (tx) => {
-    const data = { ...current!.data, number, kind: 'offer' as const, createdAt: new Date().toISOString(), createdBy: user.name, validUntil: validUntil.toISOString() };
+    const data = {
+      ...current!.data,
+      number,
+      kind: 'offer' as const,
+      createdAt: new Date().toISOString(),
+      createdBy: user.name,
+      validUntil: validUntil.toISOString(),
+      // the engineer's message is part of the offer: printed in its PDF and sent in its e-mail
+      ...(input.message ? { message: input.message } : {}),
+    };
     const ok = await repo.updateQuoteAtVersion(tx, id, input.version, {
       status: 'approved',
       currentRevision: number,
@@ -68,7 +77,9 @@ export async function approve(deps: QuoteDeps, user: SessionUser, id: string, in
         `${row.designSummary}, ${money(data.price.total_minor, row.currency)} for ${data.price.quantity} unit(s), ` +
         `valid until ${validUntil.toUTCString().slice(0, 16)}.` +
         (input.message ? `\n\n${input.message}` : '') +
-        `\n\nRead it, download the PDF and accept it here:`,
+        `\n\nThe offer is attached as a PDF. Read it and accept it here:`,
+      // the offer PDF, rendered from this revision when the e-mail is sent
+      [{ kind: 'offer-pdf', quoteId: id, revision: number }],
     );
   });
   return getQuote(deps, user, id);

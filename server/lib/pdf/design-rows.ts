@@ -100,10 +100,10 @@ export function wallPairs(d: Design, units: UnitSystem, duty?: SizeRequest): [st
   return out;
 }
 
-const CONSTRUCTION_NAMES: Record<string, string> = {
+export const CONSTRUCTION_NAMES: Record<string, string> = {
   BEM: 'fixed tubesheets', BEU: 'U-tube bundle', AES: 'split-ring floating head', AET: 'pull-through floating head',
 };
-const TEMA_CLASS_NAMES: Record<string, string> = { R: 'severe process service', C: 'general commercial service', B: 'chemical process service' };
+export const TEMA_CLASS_NAMES: Record<string, string> = { R: 'severe process service', C: 'general commercial service', B: 'chemical process service' };
 
 /**
  * Issue 11: the TEMA construction and class, and each side's nozzles (size, velocity and ρv² at

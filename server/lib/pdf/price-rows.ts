@@ -5,6 +5,7 @@
  * total = unit × quantity + adjustments. Sources and override reasons are internal and not shown.
  */
 import type { Price, PriceLine } from '../../../shared/schemas/price-book';
+import { priceLineText } from '../../../shared/price-words';
 import { formatNumber } from './quantities';
 import { formatMoney, percentOf } from './money';
 import type { Row } from './table';
@@ -20,7 +21,7 @@ export function priceRows(price: Price, detail: PriceDetail, unitDescription: st
   const rows: Row[] = [];
   if (detail === 'detailed') {
     for (const l of price.lines.filter((x) => !isAdjustment(x))) {
-      rows.push({ cells: [l.description, formatNumber(l.quantity, 4), l.unit, money(l.rate_minor), money(l.amount_minor)] });
+      rows.push({ cells: [priceLineText(l.description), formatNumber(l.quantity, 4), l.unit, money(l.rate_minor), money(l.amount_minor)] });
     }
     rows.push({ cells: ['Price per unit', '', '', '', money(price.unit_minor)], emphasis: true });
   }

@@ -28,6 +28,11 @@ export interface TableOptions {
   /** shade every other row */
   zebra?: boolean;
   width?: number;
+  /**
+   * Rows kept with the header (and a heading above) before the table may break: by default the whole
+   * table when it fits on a page; a number lets a long table start on a part-filled page instead.
+   */
+  keepRows?: number;
 }
 
 const PAD_X = 5;
@@ -75,6 +80,7 @@ function drawHeader(doc: PDFKit.PDFDocument, columns: Column[], cols: number[], 
 }
 
 interface Plan {
+  keepRows?: number;
   size: number;
   width: number;
   cols: number[];
@@ -94,7 +100,7 @@ function plan(doc: PDFKit.PDFDocument, options: TableOptions): Plan {
     return { row, height: rowHeight(doc, row.cells, cols, fonts, size) };
   });
   const headerHeight = hasHeader ? rowHeight(doc, options.columns.map((c) => c.header ?? ''), cols, options.columns.map(() => FONT.semibold), size) : 0;
-  return { size, width, cols, hasHeader, headerHeight, laid };
+  return { keepRows: options.keepRows, size, width, cols, hasHeader, headerHeight, laid };
 }
 
 /**
@@ -108,7 +114,9 @@ export function tableKeepHeight(doc: PDFKit.PDFDocument, options: TableOptions):
 function keepHeight(doc: PDFKit.PDFDocument, p: Plan): number {
   const total = p.headerHeight + p.laid.reduce((s, l) => s + l.height, 0);
   const pageRoom = contentBottom(doc) - doc.page.margins.top;
-  return total <= pageRoom ? total : p.headerHeight + p.laid.slice(0, 3).reduce((s, l) => s + l.height, 0);
+  const first = (n: number) => p.headerHeight + p.laid.slice(0, n).reduce((s, l) => s + l.height, 0);
+  if (p.keepRows !== undefined) return Math.min(total, first(p.keepRows));
+  return total <= pageRoom ? total : first(3);
 }
 
 /** Draws the table at the cursor (left margin) and leaves the cursor below it. */

@@ -11,6 +11,7 @@ import { startJobs, type Jobs } from '../../../server/lib/jobs';
 import { createTransport, queuedMailer, startMailWorker } from '../../../server/lib/mail';
 import { createStripe } from '../../../server/lib/payments';
 import { startRefundWorker } from '../../../server/features/orders/refunds';
+import { offerAttachmentRenderer } from '../../../server/features/quotes/offer';
 
 export const DEMO_PASSWORD = 'Bundlesmith-demo-1';
 
@@ -29,7 +30,7 @@ export async function startTestApp(overrides: Record<string, string> = {}): Prom
   const database = createDatabase(config.DATABASE_URL, 5);
   let jobs: Jobs | undefined;
   jobs = await startJobs(config.DATABASE_URL);
-  await startMailWorker(jobs, database.db, createTransport(config.SMTP_URL), config.MAIL_FROM);
+  await startMailWorker(jobs, database.db, createTransport(config.SMTP_URL), config.MAIL_FROM, offerAttachmentRenderer(database.db));
   const stripe = createStripe(config);
   await startRefundWorker(jobs, database.db, stripe);
   const app = createApp({ config, database, mailer: queuedMailer(jobs, database.db), clientDir: '/nonexistent', stripe, jobs });
