@@ -85,6 +85,22 @@ export async function request<T>(path: string, options: RequestOptions = {}): Pr
   }
 }
 
+/**
+ * A document from the server (a PDF, a CSV), read whole: a refusal (`{ error }` JSON) throws the
+ * `ApiError` with the server's message, so a failed document is never saved as if it were the file.
+ */
+export async function fetchFile(path: string): Promise<Blob> {
+  let response: Response;
+  try {
+    response = await fetch(`${BASE}${path}`, { headers: { 'X-Requested-With': 'bundlesmith' }, credentials: 'same-origin' });
+  } catch {
+    throw new ApiError(0, 'network', 'Could not reach the server. Check your connection and try again.');
+  }
+  if (response.status === 401) unauthorizedHandler?.();
+  if (!response.ok) throw await toApiError(response);
+  return response.blob();
+}
+
 async function toApiError(response: Response): Promise<ApiError> {
   const fallback = defaultMessage(response.status);
   let body: unknown;

@@ -13,6 +13,7 @@ import type {
   QuoteSummary,
 } from '@shared/schemas/quotes';
 import type { Design } from '@shared/schemas/thermal';
+import type { ShopLimits } from '@shared/thermal/shop-limits';
 import { request } from './http';
 
 export type QuoteList = { items: QuoteSummary[]; total: number; page: number; pageSize: number };
@@ -47,6 +48,11 @@ export function updateQuote(id: string, input: PatchQuoteInput): Promise<QuoteDe
 /** `POST /api/quotes/:id/preview` (sales): the design and price a change would give, nothing saved. */
 export function previewQuoteChange(id: string, change: QuoteChange): Promise<{ design: Design; price: Price; alternatives: Omit<Design, 'rating'>[] }> {
   return request(`/quotes/${id}/preview`, { method: 'POST', body: change });
+}
+
+/** `GET /api/quotes/shop-limits` (sales, admin): the active price book's shortest bundle and largest shell. */
+export function fetchShopLimits(): Promise<ShopLimits> {
+  return request<ShopLimits>('/quotes/shop-limits');
 }
 
 export function assignQuoteToMe(id: string, version: number): Promise<QuoteDetail> {

@@ -19,7 +19,8 @@ import { WALL_HARD_CODES } from './walls';
 /** Codes of hard findings; a rating warning with one of these codes is hard, never soft. */
 export const HARD_CODES = ['tubes-do-not-fit', 'shell-too-small', ...WALL_HARD_CODES, 'vibration', 'vibration-fluidelastic', 'vibration-vortex', 'nozzle-too-large', 'below-shop-minimum-length', 'beyond-shop-largest-shell'];
 
-type HardInput = Pick<Design, 'tubeCount' | 'tubeLength_m' | 'tubeOuterDiameter_m' | 'tubePasses' | 'shellInnerDiameter_m' | 'layout' | 'tubePitch_m'> & {
+/** What the check reads: the bundle's geometry and, where rated, its warnings and screens. */
+export type HardInput = Pick<Design, 'tubeCount' | 'tubeLength_m' | 'tubeOuterDiameter_m' | 'tubePasses' | 'shellInnerDiameter_m' | 'layout' | 'tubePitch_m'> & {
   rating: Pick<Design['rating'], 'warnings' | 'vibration' | 'nozzlesOk'>;
 };
 
