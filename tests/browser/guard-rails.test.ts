@@ -9,6 +9,7 @@ import { createDatabase, type Database } from '../../db';
 import { tubesheetHolds } from '../../shared/thermal/checks/hard-findings';
 import { api, apiSignIn } from './support/api';
 import { demoUsers, openPage, sel, signInAs, useBrowser, visit } from './support/browser';
+import { paidOrder } from './support/orders';
 
 const browser = useBrowser();
 let database: Database;
@@ -103,4 +104,30 @@ test('a customer whose maximum tube length is 0.2 m is told it is below the shor
   await message.waitFor({ timeout: 30_000 });
   expect(await message.textContent()).toContain('The maximum tube length 0.2 m is below the shortest bundle this shop builds, 1.0 m: allow at least 1.0 m.');
   expect(await page.locator(sel('quote-offer')).count()).toBe(0);
+});
+
+test('a paid order whose design the shop cannot drill: release is refused with the reason, and the drilling CSV shows the reason instead of saving a file', async (ctx) => {
+  const order = await paidOrder();
+  // an order from before the guard: its accepted revision has more tubes than its tubesheet holds
+  await database.pool.query(
+    `update quote_revisions r set data = jsonb_set(r.data, '{design,tubeCount}', '5000'::jsonb) from orders o where o.id = $1 and r.quote_id = o.quote_id and r.number = o.revision_number`,
+    [order.orderId],
+  );
+  const page = await openPage(browser(), ctx);
+  await signInAs(page, 'sales');
+  await visit(page, `/staff/orders/${order.orderId}`);
+  await page.locator(sel('order-release')).waitFor({ timeout: 60_000 });
+  await page.locator(sel('order-release')).click();
+  const refused = page.locator(sel('release-error'));
+  await refused.waitFor();
+  expect(await refused.textContent()).toMatch(/^This order cannot be released to the shop: Cannot be built as it stands: 5000 tubes do not fit/);
+
+  let downloaded = false;
+  page.on('download', () => (downloaded = true));
+  await page.locator(sel('order-drilling-csv')).click();
+  const docError = page.locator(sel('order-doc-error'));
+  await docError.waitFor();
+  expect(await docError.textContent()).toMatch(/holds \d+ tubes at this pitch and layout, fewer than the 5000 of the design/);
+  expect(downloaded).toBe(false);
+  expect(await page.locator(sel('order-status')).textContent()).toMatch(/deposit/i);
 });
