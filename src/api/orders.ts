@@ -4,7 +4,7 @@
  * Every order endpoint lives here, for the customer pages and the staff pages alike.
  */
 import type { BuildSheet } from '@shared/schemas/build-sheet';
-import type { AcceptQuoteInput, AcceptResult, ListOrdersQuery, Order, OrderStatus } from '@shared/schemas/orders';
+import type { AcceptQuoteInput, AcceptResult, AdvanceOrderInput, HydrotestState, ListOrdersQuery, Order, OrderStatus, RecordHydrotestInput } from '@shared/schemas/orders';
 import { request } from './http';
 
 /** One row of `GET /api/orders`. */
@@ -15,14 +15,7 @@ export type OrderSummary = Pick<
 export type OrderList = { items: OrderSummary[]; total: number; page: number; pageSize: number };
 export type OrderSort = ListOrdersQuery['sort'];
 
-export type AdvanceOrderInput = {
-  /** the next step, or `on-hold`; an order on hold resumes at the step it left */
-  to: OrderStatus;
-  note?: string;
-  /** the test pressure applied, Pa gauge: required (with `hydrotestPassed`) when leaving the hydrotest */
-  hydrotestPressure_Pa?: number;
-  hydrotestPassed?: boolean;
-};
+export type { AdvanceOrderInput };
 
 /**
  * `POST /api/quotes/:id/accept` (customer): records PO, billing contact and delivery address and
@@ -51,11 +44,24 @@ export function releaseOrder(id: string, note?: string): Promise<Order> {
 }
 
 /**
- * `POST /api/orders/:id/advance` (shop, admin). 409 `wrong-step` / `wrong-status` / `stale-status`;
- * 400 when leaving the hydrotest without its record; 422 `hydrotest-failed`.
+ * `POST /api/orders/:id/advance` (shop, admin). 409 `wrong-step` / `wrong-status` / `stale-status`,
+ * `hydrotest-not-passed` (fields: the sides not passed yet); 400 on hold without `reason` or `customerWording`.
  */
 export function advanceOrder(id: string, input: AdvanceOrderInput): Promise<Order> {
   return request<Order>(`/orders/${id}/advance`, { method: 'POST', body: input });
+}
+
+/** `GET /api/orders/:id/hydrotest` (staff): each side's required pressure and latest test. */
+export function fetchHydrotest(id: string): Promise<HydrotestState> {
+  return request<HydrotestState>(`/orders/${id}/hydrotest`);
+}
+
+/**
+ * `POST /api/orders/:id/hydrotest` (shop, admin), at the hydrotest step: records one or both sides.
+ * 400 naming `tube.pressure_Pa` / `shell.pressure_Pa` for a pass below the side's test pressure.
+ */
+export function recordHydrotest(id: string, input: RecordHydrotestInput): Promise<HydrotestState> {
+  return request<HydrotestState>(`/orders/${id}/hydrotest`, { method: 'POST', body: input });
 }
 
 /**

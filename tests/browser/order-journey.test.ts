@@ -110,18 +110,24 @@ test('the buyer accepts and pays; sales release; the shop ships; the buyer reads
   // The shop moves it through every step to shipped (through the API), with the hydrotest record.
   const shop = await apiAs(demoUsers.shop.email);
   for (const to of orderSteps.slice(2)) {
-    const record = to === 'ready-to-ship' ? { hydrotestPressure_Pa: 1_950_000, hydrotestPassed: true } : {};
-    await shop('POST', `/orders/${orderId}/advance`, { to, note: to === 'shipped' ? 'Truck 12, waybill 448-2291.' : undefined, ...record });
+    if (to === 'ready-to-ship') {
+      const test = await shop<{ sides: { side: 'tube' | 'shell'; required_Pa: number }[] }>('GET', `/orders/${orderId}/hydrotest`);
+      const record = Object.fromEntries(test.sides.map((s) => [s.side, { pressure_Pa: s.required_Pa + 50_000, holdTime_min: 30, passed: true }]));
+      await shop('POST', `/orders/${orderId}/hydrotest`, record);
+    }
+    await shop('POST', `/orders/${orderId}/advance`, { to, customerNote: to === 'shipped' ? 'Truck 12, waybill 448-2291.' : undefined });
   }
 
   // The buyer sees the whole timeline, who and when, the hydrotest and the waybill; nothing to come.
   await page.reload();
   await page.locator(sel('order-timeline')).waitFor();
   expect(await page.locator(sel('order-status')).getAttribute('data-status')).toBe('shipped');
-  const events = page.locator(sel('timeline-event'));
+  const events = page.locator(`${sel('timeline-event')}[data-kind="step"]`);
   expect(await events.evaluateAll((els) => els.map((e) => e.getAttribute('data-status')))).toEqual([...orderSteps]);
   expect(await page.locator(sel('timeline-to-come')).count()).toBe(0);
-  expect(await page.locator(sel('timeline-note')).allTextContents()).toEqual(expect.arrayContaining([expect.stringMatching(/Hydrotest passed at 19\.5 bar/), 'Truck 12, waybill 448-2291.']));
+  expect(await page.locator(sel('timeline-note')).allTextContents()).toEqual(
+    expect.arrayContaining([expect.stringMatching(/^Tube side tested at [\d.]+ bar\(g\): passed\.$/), expect.stringMatching(/^Shell side tested at/), 'Truck 12, waybill 448-2291.']),
+  );
   expect(await events.nth(1).locator(sel('timeline-meta')).textContent()).toMatch(/\d{4}.*·\s*\S+/); // when · who
   expect(await page.locator(sel('order-cancel-start')).count()).toBe(0);
   await page.screenshot({ path: 'test-results/order-journey-timeline-1280.png', fullPage: true });

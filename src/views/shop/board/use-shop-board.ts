@@ -5,7 +5,7 @@
  */
 import { computed, reactive, ref } from 'vue';
 import { orderSteps, type Order, type OrderStatus } from '@shared/schemas/orders';
-import { errorMessage } from '../../../api/http';
+import { errorMessage, isApiError, type FieldErrors } from '../../../api/http';
 import { advanceOrder, fetchOrder, fetchOrders, type AdvanceOrderInput, type OrderSummary } from '../../../api/orders';
 
 /** The lanes of the board, in shop order: released up to ready to ship, then on hold. */
@@ -18,12 +18,10 @@ export const nextStep = (status: OrderStatus): OrderStatus | undefined => {
   return at < 0 ? undefined : orderSteps[at + 1];
 };
 
-/** The step an order on hold left: the status of the event before its latest hold. */
-export function heldFrom(order: Order): OrderStatus | undefined {
-  const t = order.timeline;
-  for (let i = t.length - 1; i > 0; i--) if (t[i]!.status === 'on-hold') return t[i - 1]!.status;
-  return undefined;
-}
+/** The step an order on hold left (and resumes at). */
+export const heldFrom = (order: Order): OrderStatus | undefined => order.heldFrom ?? undefined;
+
+export type MoveRefusal = { message: string; fields: FieldErrors };
 
 export function useShopBoard() {
   const lanes = reactive(Object.fromEntries(LANES.map((l) => [l, [] as OrderSummary[]])) as Record<BoardLane, OrderSummary[]>);
@@ -76,8 +74,8 @@ export function useShopBoard() {
     return out;
   });
 
-  /** Sends one move; resolves to the server's message when refused (the board reloads either way on success). */
-  async function move(order: OrderSummary, input: AdvanceOrderInput, onCard = true): Promise<string | null> {
+  /** Sends one move; resolves to the server's refusal (message and fields), or null once moved and reloaded. */
+  async function move(order: OrderSummary, input: AdvanceOrderInput, onCard = true): Promise<MoveRefusal | null> {
     moving.value = order.id;
     delete errors[order.id];
     try {
@@ -87,7 +85,7 @@ export function useShopBoard() {
     } catch (error) {
       const message = errorMessage(error);
       if (onCard) errors[order.id] = message;
-      return message;
+      return { message, fields: isApiError(error) ? error.fields : {} };
     } finally {
       moving.value = null;
     }
