@@ -62,12 +62,22 @@ export async function signedIn(app: Express, email: string, password = DEMO_PASS
 
 export const unique = (prefix: string) => `${prefix}-${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 7)}`;
 
+/** A message as the SMTP sink lists it; an attachment's bytes at `${OUTBOX_URL}/messages/:id/attachments/:index`. */
+export interface CaughtMail {
+  id: string;
+  to: string[];
+  subject: string;
+  text: string;
+  links: string[];
+  attachments?: { filename: string; contentType: string; size: number; sha256: string }[];
+}
+
 /** Waits for the SMTP sink to have caught a message to `to` whose subject matches. */
 export async function waitForMail(config: Config, to: string, subject: RegExp, timeoutMs = 15_000) {
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
     const res = await fetch(`${config.OUTBOX_URL}/messages?to=${encodeURIComponent(to)}`);
-    const { items } = (await res.json()) as { items: { subject: string; text: string; links: string[] }[] };
+    const { items } = (await res.json()) as { items: CaughtMail[] };
     const found = items.find((m) => subject.test(m.subject));
     if (found) return found;
     await new Promise((r) => setTimeout(r, 200));
