@@ -4,7 +4,7 @@
  * about money also goes to the billing contact given at acceptance.
  */
 import { poLabel } from '../../../shared/format';
-import { ORDER_STATUS_LABEL, type OrderStatus } from '../../../shared/schemas/orders';
+import { CUSTOMER_EMAIL_STEPS, ORDER_STATUS_LABEL, type OrderStatus } from '../../../shared/schemas/orders';
 import { money } from '../quotes/notify';
 import type { Executor } from '../../lib/sql-adapter';
 import * as quoteRepo from '../quotes/repository';
@@ -26,8 +26,6 @@ async function billingRecipients(tx: Executor, paymentIntentId: string, ...peopl
   return [...seen.values()];
 }
 
-/** Steps the customer hears of by e-mail (the others show on the timeline only). */
-export const CUSTOMER_STEPS: OrderStatus[] = ['released', 'hydrotest', 'ready-to-ship', 'shipped', 'on-hold', 'cancelled'];
 
 export async function notifyPaid(deps: OrderDeps, tx: Executor, orderId: string) {
   const o = (await repo.findOrder(tx, orderId))!;
@@ -66,8 +64,12 @@ export async function notifyPaymentFailed(deps: OrderDeps, tx: Executor, intentI
   }
 }
 
+/**
+ * The e-mail of a step the customer hears of (shared CUSTOMER_EMAIL_STEPS: the shop board asks before
+ * such a move). `note` is the step's customer note only: staff notes never reach this e-mail.
+ */
 export async function notifyStep(deps: OrderDeps, tx: Executor, orderId: string, status: OrderStatus, note?: string | null) {
-  if (!CUSTOMER_STEPS.includes(status)) return;
+  if (!CUSTOMER_EMAIL_STEPS.includes(status)) return;
   const o = (await repo.findOrder(tx, orderId))!;
   await deps.mailer.send({
     to: o.buyerEmail,

@@ -91,8 +91,9 @@ export const roleGuides: Record<Role, RoleGuide> = {
       {
         title: 'Shop board',
         text:
-          'Released orders by step, soonest need-by first: move each on as its step is done (the hydrotest asks for ' +
-          'the pressure and the result), hold and resume, so sales and the customer see where it stands.',
+          'Released orders by step, soonest need-by first: move each on as its step is done (a move that e-mails the ' +
+          'customer asks first; the hydrotest is recorded side by side against the build sheet\'s pressures), hold with a ' +
+          'reason and a wording for the customer, and resume, so sales and the customer see where it stands.',
         route: 'shop-board',
       },
       {
