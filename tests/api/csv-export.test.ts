@@ -5,7 +5,8 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parseCsv } from '../../shared/csv';
-import { client, signedIn } from './support/app';
+import { formatDate } from '../../shared/format';
+import { client, signedIn, waitForMail } from './support/app';
 import { acceptance, eventually, startPayments, type PaymentsHarness } from './support/payments';
 import { createQuote } from './support/quotes';
 
@@ -77,6 +78,16 @@ describe('GET /api/quotes/export.csv', () => {
     expect((await client(h.t.app).get('/api/quotes/export.csv')).status).toBe(401);
     const bad = await sales.get('/api/quotes/export.csv?status=lost').expect(400);
     expect(bad.body.error.fields).toHaveProperty('status');
+  });
+});
+
+describe('the offer e-mail', () => {
+  it('writes the validity date and the units as the pages do', async () => {
+    const quote = (await pellmar.get(`/api/quotes/${pellmarQuote.id}`).expect(200)).body;
+    const mail = await waitForMail(h.t.config, 'customer@pellmar.example', new RegExp(`Your offer ${pellmarQuote.number} is ready`));
+    expect(mail.text).toContain(`valid until ${formatDate(quote.validUntil, { timeZone: 'UTC' })}.`);
+    expect(mail.text).toMatch(/ for 2 units, /);
+    expect(mail.text).not.toMatch(/unit\(s\)|GMT/);
   });
 });
 

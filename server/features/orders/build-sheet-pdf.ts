@@ -6,7 +6,7 @@
  * between shells, the joint, each side's hydrotest pressure with its basis, an inspection
  * checklist, and the cautions of the domain brief (section 4) on the first page.
  */
-import { formatDate } from '../../../shared/format';
+import { formatDate, plural } from '../../../shared/format';
 import type { BuildSheet } from '../../../shared/schemas/build-sheet';
 import { ORDER_STATUS_LABEL, type OrderStatus } from '../../../shared/schemas/orders';
 import { fromSI, STANDARD_ATMOSPHERE_PA } from '../../../shared/thermal/units';
@@ -61,7 +61,7 @@ function drawOpening(doc: PDFKit.PDFDocument, s: BuildSheet): void {
     ['Customer', o.customer],
     ['Purchase order', o.poNumber],
     ['Needed by', o.needBy ? formatDate(o.needBy.slice(0, 10)) : 'not stated'],
-    ['Quantity', `${o.quantity} unit${o.quantity === 1 ? '' : 's'}`],
+    ['Quantity', plural(o.quantity, 'unit')],
     ['Status', statusName(o.status)],
   ], 9.5);
   drawNoticeBox(doc, { title: 'Cautions', paragraphs: s.cautions });

@@ -1,4 +1,5 @@
 /** Review decisions: assign, approve (an offer), send back with questions, decline; the customer's change request. */
+import { formatDate, plural } from '../../../shared/format';
 import type { SessionUser } from '../../../shared/schemas/auth';
 import type { QuoteStatus } from '../../../shared/schemas/quotes';
 import { conflict, HttpError } from '../../lib/errors';
@@ -74,8 +75,8 @@ export async function approve(deps: QuoteDeps, user: SessionUser, id: string, in
       id,
       `Your offer ${row.number} is ready`,
       `Our engineers reviewed your request and approved offer ${row.number}, revision ${number}: ` +
-        `${row.designSummary}, ${money(data.price.total_minor, row.currency)} for ${data.price.quantity} unit(s), ` +
-        `valid until ${validUntil.toUTCString().slice(0, 16)}.` +
+        `${row.designSummary}, ${money(data.price.total_minor, row.currency)} for ${plural(data.price.quantity, 'unit')}, ` +
+        `valid until ${formatDate(validUntil, { timeZone: 'UTC' })}.` +
         (input.message ? `\n\n${input.message}` : '') +
         `\n\nThe offer is attached as a PDF. Read it and accept it here:`,
       // the offer PDF, rendered from this revision when the e-mail is sent
