@@ -19,16 +19,6 @@ export type QuoteStatus = z.infer<typeof quoteStatusSchema>;
 
 const isoDate = z.iso.date({ error: 'Use a date like 2027-03-31.' });
 
-export const createQuoteSchema = z.object({
-  duty: sizeRequestSchema,
-  quantity: z.int({ error: 'Enter a whole number of units.' }).min(1).max(500),
-  needBy: isoDate.optional(),
-  notes: plainText().trim().max(4000).optional(),
-  /** the customer's own tag, e.g. the compressor package it serves */
-  reference: plainText().trim().max(120).optional(),
-});
-export type CreateQuoteInput = z.input<typeof createQuoteSchema>;
-
 /** Geometry a sales engineer sets by hand; it is rated as given (not re-sized). */
 export const designEditSchema = z.object({
   tubeCount: z.int().min(1).max(20000),
@@ -48,6 +38,34 @@ export const designEditSchema = z.object({
   baffleCut: z.number().min(0.15).max(0.45).optional(),
 });
 export type DesignEdit = z.infer<typeof designEditSchema>;
+
+/**
+ * The design a customer picked on the sizing page (issue 12): its geometry, as a sales engineer would
+ * set it (shell and layout absent for a wall-cooled bundle). The server sizes the duty and keeps this
+ * design when it is among the sized ones or, rated as given, still meets the duty, the limits, the
+ * design margin and the shop's rules; otherwise it answers why it stored another.
+ */
+export const chosenDesignSchema = designEditSchema.extend({
+  layout: layoutSchema.optional(),
+  shellInnerDiameter_m: z.number().positive().max(3).optional(),
+});
+export type ChosenDesign = z.infer<typeof chosenDesignSchema>;
+
+/** What became of a chosen design: kept, or why another was stored (the create answer's `designChoice`). */
+export const designChoiceSchema = z.object({ kept: z.boolean(), note: z.string().optional() });
+export type DesignChoice = z.infer<typeof designChoiceSchema>;
+
+export const createQuoteSchema = z.object({
+  duty: sizeRequestSchema,
+  quantity: z.int({ error: 'Enter a whole number of units.' }).min(1).max(500),
+  needBy: isoDate.optional(),
+  notes: plainText().trim().max(4000).optional(),
+  /** the customer's own tag, e.g. the compressor package it serves */
+  reference: plainText().trim().max(120).optional(),
+  /** the design picked on the sizing page ("Request this design"); absent: the server's recommendation */
+  chosenDesign: chosenDesignSchema.optional(),
+});
+export type CreateQuoteInput = z.input<typeof createQuoteSchema>;
 
 /**
  * The most a price override may be, in minor units (100 million in the currency): a quote of 500

@@ -8,7 +8,7 @@
  * quote the first attempt stored, never a second one.
  */
 import { reactive, ref } from 'vue';
-import { createQuoteSchema, type QuoteDetail } from '@shared/schemas/quotes';
+import { createQuoteSchema, type ChosenDesign, type DesignChoice, type QuoteDetail } from '@shared/schemas/quotes';
 import type { OperatingCase } from '@shared/schemas/thermal';
 import { ApiError, errorMessage, isApiError, type FieldErrors } from '../api/http';
 import { createQuote } from '../api/quotes';
@@ -75,6 +75,8 @@ export function useQuoteRequest() {
   const explanation = ref<Explanation | null>(null);
   /** set once the server has stored the request: it must not be sent twice */
   const created = ref<QuoteDetail | null>(null);
+  /** whether the design picked on the sizing page was stored, or why another was (issue 12) */
+  const designChoice = ref<DesignChoice | null>(null);
   const idempotencyKey = newIdempotencyKey();
 
   function applyError(error: ApiError): void {
@@ -82,7 +84,7 @@ export function useQuoteRequest() {
     if (error.status === 422) {
       const field = Object.keys(dutyFields)[0];
       explanation.value = { code: error.code, message: error.message, field };
-      if (field) duty.applyServerError(new ApiError(422, error.code, error.message, { [field]: 'This is what stops the design: see the explanation below.' }));
+      if (field) duty.applyServerError(new ApiError(422, error.code, error.message, { [field]: error.message }));
       return;
     }
     duty.applyServerError(new ApiError(error.status, error.code, error.message, dutyFields));
@@ -90,8 +92,8 @@ export function useQuoteRequest() {
     failure.value = error.status === 400 ? 'The server did not accept some fields: see the messages under them.' : error.message;
   }
 
-  /** Sends the request, then the files; the stored quote, or null when nothing was stored. */
-  async function submit(): Promise<QuoteDetail | null> {
+  /** Sends the request (with the design picked, if any), then the files; the stored quote, or null when nothing was stored. */
+  async function submit(chosen?: ChosenDesign | null): Promise<QuoteDetail | null> {
     if (created.value) return created.value;
     failure.value = null;
     explanation.value = null;
@@ -110,7 +112,9 @@ export function useQuoteRequest() {
         failure.value = 'An operating case has a value that cannot be read: check its fields.';
         return null;
       }
-      created.value = await createQuote({ ...rest, duty: withCases }, idempotencyKey);
+      const answer: QuoteDetail & { designChoice?: DesignChoice } = await createQuote({ ...rest, duty: withCases, ...(chosen ? { chosenDesign: chosen } : {}) }, idempotencyKey);
+      designChoice.value = answer.designChoice ?? null;
+      created.value = answer;
     } catch (error) {
       if (isApiError(error)) applyError(error);
       else failure.value = errorMessage(error);
@@ -122,7 +126,7 @@ export function useQuoteRequest() {
     return created.value;
   }
 
-  return { duty, cases, details, checks, uploads, busy, failure, explanation, created, submit };
+  return { duty, cases, details, checks, uploads, busy, failure, explanation, created, designChoice, submit };
 }
 
 export type QuoteRequest = ReturnType<typeof useQuoteRequest>;

@@ -46,6 +46,7 @@ export function fillSizingForm(form: SizingForm, duty: SizeRequest): void {
   m.limits.maxTubeLength = quantity('length', c.maxTubeLength_m, 'm');
   m.limits.maxPressureDrop = quantity('pressureDrop', c.maxPressureDrop_Pa / 1000, 'kPa');
   m.limits.maxShellPressureDrop = quantity('pressureDrop', c.maxShellPressureDrop_Pa === undefined ? null : c.maxShellPressureDrop_Pa / 1000, 'kPa');
+  m.limits.designMargin_pct = c.designMargin_pct ?? null;
   m.limits.tubeOuterDiameters_m = [...(c.tubeOuterDiameters_m ?? [])];
   m.limits.materials = [...(c.materials ?? [])];
   m.limits.tubePasses = [...(c.tubePasses ?? [])];

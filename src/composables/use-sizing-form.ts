@@ -7,6 +7,7 @@
  */
 import { computed, reactive, ref, watch } from 'vue';
 import { sizeRequestSchema, type SizeRequest, type SizeRequestInput } from '@shared/schemas/thermal';
+import { DEFAULT_DESIGN_MARGIN_PCT } from '@shared/schemas/price-book';
 import { UnitInputError, type UnitSystem } from '@shared/thermal/units';
 import { FLOW_FIELDS, flowFields, flowUnit } from '@shared/thermal/flow-units';
 import { flowInUnit } from '@shared/thermal/flow-convert';
@@ -74,6 +75,11 @@ function defaults() {
       materials: [] as string[],
       tubePasses: [] as number[],
       layouts: [] as number[],
+      /**
+       * design margin on area, %: the fabricator's usual 10 % (price book default), so the page shows
+       * the lengths a quote is sized with (a quote applies at least the book's margin)
+       */
+      designMargin_pct: DEFAULT_DESIGN_MARGIN_PCT as number | null,
       /** which side the process stream goes on; 'either' lets the engine try both */
       processSide: 'either' as 'either' | 'tubes' | 'shell',
     },
@@ -180,6 +186,7 @@ function build(m: SizingModel): Built {
     materials: some(l.materials),
     tubePasses: some(l.tubePasses),
     layouts: some(l.layouts),
+    designMargin_pct: l.designMargin_pct ?? undefined,
     // a wall (bath) keeps the process in the tubes: the choice only exists with a coolant stream
     processSide: m.sink === 'coolant' && l.processSide !== 'either' ? l.processSide : undefined,
   };

@@ -42,8 +42,8 @@ export function useSizingRun(form: SizingForm) {
       if (isApiError(error) && error.status === 422) {
         const field = Object.keys(error.fields)[0];
         explanation.value = { code: error.code, message: error.message, field };
-        // Point at the field the physics is about; the words stay in the one explanation panel.
-        if (field) form.applyServerError(new ApiError(422, error.code, error.message, { [field]: 'This is what stops the design: see the explanation below.' }));
+        // The words under the field the physics is about (in the field's unit, issue 12), the panel says what to relax.
+        if (field) form.applyServerError(new ApiError(422, error.code, error.message, { [field]: error.message }));
       } else {
         if (isApiError(error)) form.applyServerError(error);
         failure.value =

@@ -39,9 +39,10 @@ export function quotesRouter(deps: QuoteDeps): Router {
 
   r.post('/', requireRole('customer'), async (req, res) => {
     const key = parse(idempotencyHeader, { 'Idempotency-Key': req.get('Idempotency-Key') }, 'header')['Idempotency-Key'];
-    const { quote, created } = await submitQuote(deps, currentUser(req), parse(createQuoteSchema, req.body), key);
-    // 201 for a new quote; 200 with the same quote for a retry of a submission already stored
-    res.status(created ? 201 : 200).json(quote);
+    const { quote, created, designChoice } = await submitQuote(deps, currentUser(req), parse(createQuoteSchema, req.body), key);
+    // 201 for a new quote; 200 with the same quote for a retry of a submission already stored;
+    // `designChoice`: whether the design picked on the sizing page was kept, or why not (issue 12)
+    res.status(created ? 201 : 200).json(designChoice ? { ...quote, designChoice } : quote);
   });
   r.get('/', requireUser, async (req, res) => {
     res.json(await listQuotes(deps, currentUser(req), parse(listQuotesQuerySchema, req.query, 'query')));

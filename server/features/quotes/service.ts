@@ -1,11 +1,12 @@
 import type { SessionUser } from '../../../shared/schemas/auth';
 import { customerSeesQuoteEvent } from '../../../shared/schemas/events';
-import type { CreateQuoteInput, ListQuotesQuery, QuoteDetail } from '../../../shared/schemas/quotes';
+import type { CreateQuoteInput, DesignChoice, ListQuotesQuery, QuoteDetail } from '../../../shared/schemas/quotes';
 import { createQuoteSchema } from '../../../shared/schemas/quotes';
 import { isStaff } from '../../lib/auth/guards';
 import { notFound } from '../../lib/errors';
 import type { QuoteDeps } from './deps';
 import { notifySubmitted } from './notify';
+import { keepChosen } from './chosen-design';
 import { activeBook, buildRevision, priceWithBook, sizeWithBook } from './pricing-port';
 import { designSummary, toDetail, toSummary } from './present';
 import * as repo from './repository';
@@ -22,13 +23,14 @@ export async function submitQuote(
   customer: SessionUser,
   input: ReturnType<typeof createQuoteSchema.parse>,
   clientKey?: string,
-): Promise<{ quote: QuoteDetail; created: boolean }> {
+): Promise<{ quote: QuoteDetail; created: boolean; designChoice?: DesignChoice }> {
   if (clientKey) {
     const earlier = await repo.findQuoteIdByClientKey(deps.db, customer.id, clientKey);
     if (earlier) return { quote: await getQuote(deps, customer, earlier), created: false };
   }
   const book = await activeBook(deps);
-  const { design, alternatives } = await sizeWithBook(deps.config, input.duty, book);
+  // the design picked on the sizing page, when it is still valid (issue 12), else the recommended one and why
+  const { design, alternatives, choice } = await keepChosen(deps.config, input.duty, book, await sizeWithBook(deps.config, input.duty, book), input.chosenDesign);
   const price = priceWithBook(design, book, { quantity: input.quantity, needBy: input.needBy });
   const summary = designSummary(design, input.duty);
   const store = () => deps.db.transaction(async (tx) => {
@@ -77,7 +79,7 @@ export async function submitQuote(
     if (!earlier) throw err;
     return { quote: await getQuote(deps, customer, earlier), created: false };
   }
-  return { quote: await getQuote(deps, customer, id), created: true };
+  return { quote: await getQuote(deps, customer, id), created: true, ...(choice ? { designChoice: choice } : {}) };
 }
 
 /** A new quote without an idempotency key (the seed, scripts). */
