@@ -2,17 +2,8 @@
  * Money for the review pages and the price book: integer minor units on the wire, the currency's
  * symbol on screen, major units in inputs (so a person types 12.50, not 1250).
  */
-const formatters = new Map<string, Intl.NumberFormat>();
-
-/** "€12,340.00" from 1234000 minor units of EUR. */
-export function formatMoney(minor: number, currency: string): string {
-  let f = formatters.get(currency);
-  if (!f) {
-    f = new Intl.NumberFormat('en-GB', { style: 'currency', currency });
-    formatters.set(currency, f);
-  }
-  return f.format(minor / 100);
-}
+/** "€12,340.00" from 1234000 minor units of EUR, as on every page, PDF and e-mail (shared/format.ts). */
+export { formatMoney } from '@shared/format';
 
 export const toMajor = (minor: number): number => minor / 100;
 /** Major units typed by a person → integer minor units (rounded to the cent). */
