@@ -82,6 +82,8 @@ export async function recordHydrotest(deps: OrderDeps, user: SessionUser, id: st
   }
   if (Object.keys(fields).length) throw badRequest(Object.values(fields).join(' '), fields);
   await deps.db.transaction(async (tx) => {
+    // the order's row locked: a move off the hydrotest either waits for this record or has happened already
+    if ((await repo.lockOrderStatus(tx, id)) !== 'hydrotest') throw new HttpError(409, 'stale-status', 'The order moved on meanwhile; reload it.');
     for (const side of hydrotestSides) {
       const t = input[side];
       if (!t) continue;

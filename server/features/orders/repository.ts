@@ -95,6 +95,12 @@ export async function addEvent(db: Executor, orderId: string, actorId: string | 
   await db.insert(orderEvents).values({ orderId, actorId, status, kind, note: note ?? null, data: data ?? null, createdAt: sql`clock_timestamp()` });
 }
 
+/** The order's status, its row locked until the transaction ends. */
+export async function lockOrderStatus(db: Executor, id: string): Promise<OrderStatus | undefined> {
+  const [row] = await db.select({ status: orders.status }).from(orders).where(eq(orders.id, id)).for('update');
+  return row?.status;
+}
+
 /** Moves the order from `from` to `to`; false when it was not at `from` any more (a concurrent move). */
 export async function moveOrder(db: Executor, id: string, from: OrderStatus, changes: Partial<typeof orders.$inferInsert> & { status: OrderStatus }) {
   const rows = await db

@@ -130,15 +130,16 @@ export async function advanceOrder(deps: OrderDeps, user: SessionUser, id: strin
   }
   const next = orderSteps[at + 1];
   if (input.to !== next) throw new HttpError(409, 'wrong-step', `The next step after ${from} is ${next}, not ${input.to}.`);
-  if (from === 'hydrotest') {
-    const test = await hydrotestState(deps, deps.db, row);
-    if (!test.passed) {
-      const open = test.sides.filter((s) => !s.latest?.passed);
-      const fields = Object.fromEntries(open.map((s) => [s.side, s.latest ? 'its latest test failed: repair, then test again' : 'not tested yet']));
-      throw new HttpError(409, 'hydrotest-not-passed', `The order stays at the hydrotest until both sides pass: ${open.map((s) => `${SIDE_NAME[s.side].toLowerCase()} ${fields[s.side]}`).join('; ')}.`, fields);
-    }
-  }
-  return move(deps, user, id, from, next!, notes);
+  // checked inside the move's transaction, after its update holds the order's row: a test recorded
+  // meanwhile (hydrotest.ts locks the same row) is either seen here or refused there
+  const bothSidesPassed = async (tx: Executor) => {
+    const test = await hydrotestState(deps, tx, row);
+    if (test.passed) return;
+    const open = test.sides.filter((s) => !s.latest?.passed);
+    const fields = Object.fromEntries(open.map((s) => [s.side, s.latest ? 'its latest test failed: repair, then test again' : 'not tested yet']));
+    throw new HttpError(409, 'hydrotest-not-passed', `The order stays at the hydrotest until both sides pass: ${open.map((s) => `${SIDE_NAME[s.side].toLowerCase()} ${fields[s.side]}`).join('; ')}.`, fields);
+  };
+  return move(deps, user, id, from, next!, notes, {}, from === 'hydrotest' ? bothSidesPassed : undefined);
 }
 
 const BEFORE_FABRICATION: OrderStatus[] = ['deposit-paid', 'released'];
