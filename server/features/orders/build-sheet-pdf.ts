@@ -67,7 +67,6 @@ function drawOpening(doc: PDFKit.PDFDocument, s: BuildSheet): void {
   drawNoticeBox(doc, { title: 'Cautions', paragraphs: s.cautions });
 }
 
-const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 const streamWord = (stream: string) => (stream === 'wall' ? 'bath' : stream);
 
 function drawDesignAndCuts(doc: PDFKit.PDFDocument, s: BuildSheet): void {
