@@ -11,21 +11,32 @@ import { unitLabel, type Quantity } from './use-units';
 const NUM = String.raw`(-?\d[\d,]*(?:\.\d+)?(?:e[+-]?\d+)?)`;
 
 /** Unit texts messages use, per kind, with the mathjs unit (or flow unit) each stands for. */
-const WRITTEN: Partial<Record<Quantity['kind'], [RegExp, string][]>> = {
-  temperature: [[new RegExp(`${NUM}\\s*°C`, 'g'), 'degC']],
+const UNIT_TEXT: Partial<Record<Quantity['kind'], [string, string][]>> = {
+  temperature: [['°C', 'degC']],
   pressure: [
-    [new RegExp(`${NUM}\\s*Pa \\(absolute\\)`, 'g'), 'Pa'],
-    [new RegExp(`${NUM}\\s*bar\\(a\\)`, 'g'), 'bar'],
+    ['Pa \\(absolute\\)', 'Pa'],
+    ['bar\\(a\\)', 'bar'],
   ],
-  pressureDrop: [[new RegExp(`${NUM}\\s*Pa\\b`, 'g'), 'Pa']],
-  length: [[new RegExp(`${NUM}\\s*m\\b(?![²³/])`, 'g'), 'm']],
+  pressureDrop: [['Pa\\b', 'Pa']],
+  length: [['m\\b(?![²³/])', 'm']],
   flow: [
-    [new RegExp(`${NUM}\\s*kg/s`, 'g'), 'kg/s'],
-    [new RegExp(`${NUM}\\s*kg/h`, 'g'), 'kg/h'],
-    [new RegExp(`${NUM}\\s*m³/s`, 'g'), 'm^3/s'],
-    [new RegExp(`${NUM}\\s*m³/h`, 'g'), 'm^3/h'],
+    ['kg/s', 'kg/s'],
+    ['kg/h', 'kg/h'],
+    ['m³/s', 'm^3/s'],
+    ['m³/h', 'm^3/h'],
   ],
 };
+
+/**
+ * Unit texts messages use, per kind, with the unit each stands for: a range written with the unit
+ * once ("between -100 and 600 °C", "above 0 and at most 12 m") first, then single numbers.
+ */
+const WRITTEN: Partial<Record<Quantity['kind'], [RegExp, RegExp, string][]>> = Object.fromEntries(
+  Object.entries(UNIT_TEXT).map(([kind, list]) => [
+    kind,
+    list!.map(([text, unit]) => [new RegExp(`${NUM}(\\s+(?:and at most|and|to)\\s+)${NUM}\\s*${text}`, 'g'), new RegExp(`${NUM}\\s*${text}`, 'g'), unit]),
+  ]),
+);
 
 function shown(x: number): string {
   return (Number(x.toPrecision(4)) + 0).toLocaleString('en-US', { maximumSignificantDigits: 4 });
@@ -57,8 +68,15 @@ function convert(value: number, written: string, q: Quantity): string | null {
 export function inFieldUnit(message: string | undefined, q: Quantity): string | undefined {
   if (!message) return message;
   let out = message;
-  for (const [pattern, written] of WRITTEN[q.kind] ?? []) {
-    out = out.replace(pattern, (all, num: string) => convert(Number(num.replace(/,/g, '')), written, q) ?? all);
+  const read = (num: string) => Number(num.replace(/,/g, ''));
+  for (const [range, single, written] of WRITTEN[q.kind] ?? []) {
+    out = out.replace(range, (all, a: string, between: string, b: string) => {
+      const from = convert(read(a), written, q);
+      const to = convert(read(b), written, q);
+      // "-148 and 1,112 °F": the unit once, after the second number
+      return from && to ? `${from.slice(0, from.lastIndexOf(' '))}${between}${to}` : all;
+    });
+    out = out.replace(single, (all, num: string) => convert(read(num), written, q) ?? all);
   }
   return out;
 }
