@@ -26,6 +26,9 @@ beforeAll(async () => {
 });
 afterAll(() => h.close());
 
+// each test walks a quote to a paid order and through the shop: more than the default 20 s on a loaded machine
+const LONG = { timeout: 90_000 };
+
 type Event = { kind: string; status: string; note: string | null; detail?: string };
 
 async function paidOrder() {
@@ -69,7 +72,7 @@ async function customerMails() {
   return ((await res.json()) as { items: { subject: string; text: string }[] }).items;
 }
 
-describe('the hydrotest, side by side', () => {
+describe('the hydrotest, side by side', LONG, () => {
   it('asks for the build sheet\'s pressures, refuses a pass below them naming the side, keeps the order on a fail, moves on when both pass', async () => {
     const { orderId } = await orderAtHydrotest();
     const sheet = (await shop.get(`/api/orders/${orderId}/build-sheet`).expect(200)).body;
@@ -127,7 +130,7 @@ describe('the hydrotest, side by side', () => {
   });
 });
 
-describe('on hold', () => {
+describe('on hold', LONG, () => {
   it('needs a reason for staff and a wording for the customer; the customer reads the wording only', async () => {
     const { orderId } = await paidOrder();
     await sales.post(`/api/orders/${orderId}/release`).send({}).expect(200);
@@ -159,7 +162,7 @@ describe('on hold', () => {
   });
 });
 
-describe('who sees which event', () => {
+describe('who sees which event', LONG, () => {
   it('every quote and order event kind has an audience; the customer\'s pages and e-mails carry only the customer\'s kinds', async () => {
     const PAINT = 'Paint RAL 5015 sky blue, for the shop';
     // a quote with every kind of quote event: questions answered, an internal note, an attachment, approval, acceptance, order
