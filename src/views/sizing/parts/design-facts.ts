@@ -1,4 +1,5 @@
 /** The recommended design as labelled facts, grouped for the design card, in the chosen unit system. */
+import { formatNumber } from '@shared/format';
 import type { Design, SizeRequest } from '@shared/schemas/thermal';
 import { correctionMethods } from '@shared/thermal/correlations/methods';
 import { formatQuantity, type QuantityKind, type UnitSystem } from '@shared/thermal/units';
@@ -23,7 +24,8 @@ const REGIME: Record<string, string> = {
   turbulent: 'turbulent',
 };
 
-const num = (value: number, digits = 3) => String(Number(value.toPrecision(digits)));
+/** grouped, a few significant digits ("12,300"), as every page writes numbers */
+const num = (value: number, digits = 3) => formatNumber(value, digits);
 
 /** A tube-side correction in words (the method table's name), never its code. */
 function correctionName(code: string): string {
