@@ -86,6 +86,7 @@ for (const width of WIDTHS) {
     for (const screen of SCREENS) {
       test(`${screen.name}: no sideways page scroll, key columns in view`, async (ctx) => {
         const page = await openPage(browser(), ctx, { width, height: 900 });
+        page.setDefaultNavigationTimeout(60_000); // a loaded machine; nothing here is timed
         await signInAs(page, screen.role);
         await visit(page, screen.path());
         await page.locator(sel(screen.ready)).first().waitFor({ timeout: 60_000 });
@@ -127,6 +128,7 @@ for (const width of WIDTHS) {
 
 test('a plain click on a queue number opens the workspace in the app; the cue follows sideways scrolling', async (ctx) => {
   const page = await openPage(browser(), ctx, { width: 390, height: 900 });
+  page.setDefaultNavigationTimeout(60_000);
   await signInAs(page, 'sales');
   await visit(page, '/review');
   await page.locator(sel('queue-row')).first().waitFor({ timeout: 60_000 });
