@@ -143,7 +143,8 @@ test('an impossible duty gets the explanation on the New request page, and nothi
   await explanation.waitFor();
   expect(await explanation.textContent()).toMatch(/coolant/i);
   expect(await explanation.textContent()).toMatch(/Nothing was sent/);
-  expect(await page.locator(`${sel('process-outlet-item')} .n-form-item-feedback`).textContent()).toMatch(/explanation/);
+  // issue 12: the engine's words sit under the field they are about
+  expect(await page.locator(`${sel('process-outlet-item')} .n-form-item-feedback`).textContent()).toMatch(/target outlet 20 °C is at or below the coolant inlet temperature 27 °C/);
   expect(pathOf(page)).toBe('/quotes/new');
 });
 

@@ -63,8 +63,8 @@ test('a target outlet below the coolant inlet gets an explanation, not a result'
   expect(await explanation.textContent()).toMatch(/coolant/i);
   expect(await page.locator(sel('sizing-design')).count()).toBe(0);
   expect(await page.locator(sel('sizing-alternatives')).count()).toBe(0);
-  // The field the physics is about is marked.
-  expect(await page.locator(`${sel('process-outlet-item')} .n-form-item-feedback`).textContent()).toMatch(/explanation/);
+  // The field the physics is about carries the engine's words (issue 12).
+  expect(await page.locator(`${sel('process-outlet-item')} .n-form-item-feedback`).textContent()).toMatch(/target outlet 20 °C is at or below the coolant inlet temperature 27 °C/);
 });
 
 test('the US toggle converts every field and sizes the same duty', async (ctx) => {
