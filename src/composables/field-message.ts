@@ -10,7 +10,7 @@ import { unitLabel, type Quantity } from './use-units';
 
 const NUM = String.raw`(-?\d[\d,]*(?:\.\d+)?(?:e[+-]?\d+)?)`;
 
-/** Unit texts messages use, per kind, with the mathjs unit (or flow unit) each stands for. */
+/** How messages write SI units, per kind (as regular-expression text), and the unit each stands for. */
 const UNIT_TEXT: Partial<Record<Quantity['kind'], [string, string][]>> = {
   temperature: [['°C', 'degC']],
   pressure: [
@@ -27,10 +27,7 @@ const UNIT_TEXT: Partial<Record<Quantity['kind'], [string, string][]>> = {
   ],
 };
 
-/**
- * Unit texts messages use, per kind, with the unit each stands for: a range written with the unit
- * once ("between -100 and 600 °C", "above 0 and at most 12 m") first, then single numbers.
- */
+/** Per kind: a range written with its unit once ("between -100 and 600 °C", "above 0 and at most 12 m"), then single numbers. */
 const WRITTEN: Partial<Record<Quantity['kind'], [RegExp, RegExp, string][]>> = Object.fromEntries(
   Object.entries(UNIT_TEXT).map(([kind, list]) => [
     kind,
