@@ -6,3 +6,6 @@ export * from './quotes';
 export * from './price-books';
 export * from './orders';
 export * from './mail';
+export * from './invoices';
+export * from './audit';
+export * from './library';

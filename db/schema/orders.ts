@@ -60,6 +60,10 @@ export const orders = pgTable(
     refundError: text('refund_error'),
     currency: text('currency').notNull(),
     hydrotestPressurePa: bigint('hydrotest_pressure_pa', { mode: 'number' }),
+    /** an admin let the order ship before its balance is paid (payment terms, a trusted customer) */
+    shipReleaseReason: text('ship_release_reason'),
+    shipReleasedBy: uuid('ship_released_by').references(() => users.id),
+    shipReleasedAt: timestamp('ship_released_at', { withTimezone: true }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },

@@ -1,4 +1,4 @@
-import { index, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { index, integer, pgEnum, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { organizations } from './organizations';
 
 export const userRole = pgEnum('user_role', ['customer', 'sales', 'shop', 'admin']);
@@ -16,6 +16,8 @@ export const users = pgTable(
     passwordHash: text('password_hash').notNull(),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     disabledAt: timestamp('disabled_at', { withTimezone: true }),
+    /** optimistic lock for admin edits (role, active) */
+    version: integer('version').notNull().default(1),
   },
   (t) => [index('users_organization_idx').on(t.organizationId)],
 );
